@@ -1,0 +1,45 @@
+import { existsSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import { DynamicModule, Module } from '@nestjs/common';
+import { ConfigModule, ConfigService } from '@nestjs/config';
+import { APP_FILTER, APP_PIPE } from '@nestjs/core';
+import { ScheduleModule } from '@nestjs/schedule';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuthModule } from './auth/auth.module';
+import { validateEnv } from './config/env.validation';
+import { ApiExceptionFilter } from './core/filters/api-exception.filter';
+import { createValidationPipe } from './core/validation.pipe';
+import { typeormOptions } from './database/typeorm-options';
+import { HealthModule } from './health/health.module';
+import { UsersModule } from './users/users.module';
+
+function frontendModules(): DynamicModule[] {
+  const dist = resolve(process.env.FRONTEND_DIST ?? join(__dirname, '..', '..', 'frontend', 'dist'));
+  if (!existsSync(join(dist, 'index.html'))) return [];
+  return [ServeStaticModule.forRoot({ rootPath: dist, exclude: ['/api/{*path}'] })];
+}
+
+@Module({
+  imports: [
+    ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, validate: validateEnv }),
+    TypeOrmModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService) => ({
+        ...typeormOptions(config.getOrThrow<string>('DATABASE_URL')),
+        autoLoadEntities: true,
+        migrationsRun: true,
+      }),
+    }),
+    ScheduleModule.forRoot(),
+    ...frontendModules(),
+    HealthModule,
+    UsersModule,
+    AuthModule,
+  ],
+  providers: [
+    { provide: APP_PIPE, useFactory: createValidationPipe },
+    { provide: APP_FILTER, useClass: ApiExceptionFilter },
+  ],
+})
+export class AppModule {}

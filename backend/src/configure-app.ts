@@ -1,0 +1,23 @@
+import type { INestApplication } from '@nestjs/common';
+import helmet from 'helmet';
+
+/** Settings shared by the server and the tests' app. */
+export function configureApp(app: INestApplication): void {
+  app.setGlobalPrefix('api');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          scriptSrc: ["'self'"],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          upgradeInsecureRequests: null,
+        },
+      },
+    }),
+  );
+  app.enableShutdownHooks();
+}

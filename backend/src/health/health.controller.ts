@@ -1,0 +1,23 @@
+import { Controller, Get, Res } from '@nestjs/common';
+import { ApiTags } from '@nestjs/swagger';
+import type { Response } from 'express';
+import { DataSource } from 'typeorm';
+import { Public } from '../core/decorators/public.decorator';
+
+@ApiTags('health')
+@Controller('health')
+export class HealthController {
+  constructor(private readonly ds: DataSource) {}
+
+  @Public()
+  @Get()
+  async health(@Res({ passthrough: true }) res: Response): Promise<{ status: string; db: string }> {
+    try {
+      await Promise.race([this.ds.query('SELECT 1'), new Promise((_, rej) => setTimeout(() => rej(new Error('timeout')), 2000))]);
+      return { status: 'ok', db: 'up' };
+    } catch {
+      res.status(503);
+      return { status: 'degraded', db: 'down' };
+    }
+  }
+}

@@ -1,0 +1,29 @@
+import 'reflect-metadata';
+import { Logger } from '@nestjs/common';
+import { NestFactory } from '@nestjs/core';
+import { NestExpressApplication } from '@nestjs/platform-express';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import { AppModule } from './app.module';
+import { configureApp } from './configure-app';
+import { validateEnv } from './config/env.validation';
+
+async function bootstrap(): Promise<void> {
+  let env;
+  try {
+    env = validateEnv(process.env);
+  } catch (err) {
+    console.error((err as Error).message);
+    process.exit(1);
+  }
+  const app = await NestFactory.create<NestExpressApplication>(AppModule, { rawBody: true, bufferLogs: false });
+  configureApp(app);
+  app.set('trust proxy', 'loopback');
+  const doc = SwaggerModule.createDocument(
+    app,
+    new DocumentBuilder().setTitle('Amberline API').setDescription('Oversize/overweight move desk').setVersion('0.1.0').addBearerAuth().build(),
+  );
+  SwaggerModule.setup('api/docs', app, doc);
+  await app.listen(env.PORT, env.HOST);
+  Logger.log(`Amberline listening on http://${env.HOST}:${env.PORT}`, 'Bootstrap');
+}
+void bootstrap();

@@ -1,0 +1,32 @@
+import { Body, Controller, Get, Param, ParseUUIDPipe, Patch, Post, Query } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import type { Page, SessionUser, UserDto } from '@amberline/common';
+import { CurrentUser } from '../core/decorators/current-user.decorator';
+import { Roles } from '../core/decorators/roles.decorator';
+import { CreateUserDto, ListUsersQuery, UpdateUserDto } from './dto/user.dto';
+import { UsersService } from './users.service';
+
+@ApiTags('users')
+@ApiBearerAuth()
+@Controller('users')
+export class UsersController {
+  constructor(private readonly users: UsersService) {}
+
+  @Get()
+  @Roles('admin')
+  list(@Query() q: ListUsersQuery): Promise<Page<UserDto>> {
+    return this.users.list(q);
+  }
+
+  @Post()
+  @Roles('admin')
+  create(@Body() dto: CreateUserDto): Promise<UserDto> {
+    return this.users.create(dto);
+  }
+
+  @Patch(':id')
+  @Roles('admin')
+  update(@Param('id', new ParseUUIDPipe()) id: string, @Body() dto: UpdateUserDto, @CurrentUser() actor: SessionUser): Promise<UserDto> {
+    return this.users.update(id, dto, actor);
+  }
+}

@@ -1,0 +1,8 @@
+/** Field limits shared by the server's DTOs and the browser's forms. */
+export const LIMITS = {
+  emailMax: 254,
+  nameMax: 120,
+  passwordMin: 8,
+  passwordMax: 128,
+  pageSizeMax: 100,
+} as const;
