@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # PostgreSQL from Debian's packages, on loopback, with its data folder inside the project.
-# usage: pg.sh start|stop|status|url|psql|reset
+# usage: pg.sh start|stop|status|url|psql|recreate|reset
 #   env: PGPORT (54329), PGDB (amberline), PGDATA_DIR (.data/pg)
 set -euo pipefail
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/../.." && pwd)"
@@ -47,6 +47,9 @@ case "${1:-}" in
   status) as_pg "$PGBIN/pg_ctl" -D "$DATA" status ;;
   url)    echo "postgres://postgres@127.0.0.1:$PGPORT/$DB" ;;
   psql)   shift; as_pg "$PGBIN/psql" -h "$SOCK" -p "$PGPORT" -U postgres -d "$DB" "$@" ;;
+  recreate) # drop and create the database: a clean slate for a test run
+    as_pg "$PGBIN/dropdb" -h "$SOCK" -p "$PGPORT" -U postgres --if-exists --force "$DB"
+    as_pg "$PGBIN/createdb" -h "$SOCK" -p "$PGPORT" -U postgres "$DB" ;;
   reset)  "$0" stop; rm -rf "$DATA" ;;
-  *) echo "usage: $0 start|stop|status|url|psql|reset" >&2; exit 2 ;;
+  *) echo "usage: $0 start|stop|status|url|psql|recreate|reset" >&2; exit 2 ;;
 esac

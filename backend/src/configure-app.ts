@@ -19,5 +19,7 @@ export function configureApp(app: INestApplication): void {
       },
     }),
   );
+  // a reverse proxy on this machine may pass the client address along
+  app.getHttpAdapter().getInstance().set('trust proxy', 'loopback');
   app.enableShutdownHooks();
 }

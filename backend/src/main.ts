@@ -17,7 +17,6 @@ async function bootstrap(): Promise<void> {
   }
   const app = await NestFactory.create<NestExpressApplication>(AppModule, { rawBody: true, bufferLogs: false });
   configureApp(app);
-  app.set('trust proxy', 'loopback');
   const doc = SwaggerModule.createDocument(
     app,
     new DocumentBuilder().setTitle('Amberline API').setDescription('Oversize/overweight move desk').setVersion('0.1.0').addBearerAuth().build(),

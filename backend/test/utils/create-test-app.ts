@@ -1,0 +1,37 @@
+import type { INestApplication } from '@nestjs/common';
+import { Test } from '@nestjs/testing';
+import { DataSource } from 'typeorm';
+import { seedUser, type SeededUser, type SeedUserInput } from '@amberline/seed';
+import request from 'supertest';
+import { AppModule } from '../../src/app.module';
+import { configureApp } from '../../src/configure-app';
+
+export type TestApp = {
+  app: INestApplication;
+  ds: DataSource;
+  http: () => ReturnType<typeof request>;
+  /** A user of the given role with a fresh token. */
+  signedIn: (input?: SeedUserInput) => Promise<SeededUser & { token: string }>;
+  close: () => Promise<void>;
+};
+
+let ipCounter = 1;
+/** A distinct client address per call (through X-Forwarded-For), so sign-in limits of one test do not touch another. */
+export const nextIp = () => `10.${process.pid % 250}.${Math.floor(ipCounter / 250) % 250}.${ipCounter++ % 250}`;
+
+/** Boots the real AppModule against the test database, with the same settings as the server. */
+export async function createTestApp(): Promise<TestApp> {
+  const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).compile();
+  const app = moduleRef.createNestApplication({ rawBody: true, logger: ['error', 'warn'] });
+  configureApp(app);
+  await app.init();
+  const ds = app.get(DataSource);
+  const http = () => request(app.getHttpServer());
+  const signedIn = async (input: SeedUserInput = {}) => {
+    const user = await seedUser(ds, input);
+    const res = await http().post('/api/auth/login').set('x-forwarded-for', nextIp()).send({ email: user.email, password: user.password });
+    if (res.status !== 200) throw new Error(`sign-in failed: ${res.status} ${JSON.stringify(res.body)}`);
+    return { ...user, token: res.body.accessToken as string };
+  };
+  return { app, ds, http, signedIn, close: () => app.close() };
+}

@@ -1,0 +1,185 @@
+/** Flags, signs and lamps for a projecting or oversize load. */
+import {
+  JurisdictionRule,
+  MeasuredLoad,
+  cite,
+  dimensionsOverLegal,
+  triggerFires,
+  type SignRule,
+  type Trigger,
+} from './jurisdiction-rule';
+import { PLANNING_CAUTION, Reason, SOURCES } from './reasons';
+import { FEDERAL_DEFAULT_RULE } from './rulebook-samples';
+import { formatFeetInches } from './units';
+import { ABSURD, checkNumber } from './validate';
+
+export type MarkingsInput = {
+  /** Largest projection beyond either side (or give left and right). */
+  sideProjectionIn: number;
+  sideProjectionLeftIn?: number;
+  sideProjectionRightIn?: number;
+  rearProjectionIn: number;
+  rearProjectionWidthIn: number;
+  /** Overall dimensions, for the jurisdiction's sign, corner-flag and lamp rules. */
+  widthIn?: number;
+  heightIn?: number;
+  lengthIn?: number;
+  frontOverhangIn?: number;
+  grossLb?: number;
+};
+
+export type FlagPlacement = { position: string; minSquareIn: number; colors: string; reason: string; source: string };
+export type LampPlacement = { position: string; color: 'red' | 'amber'; count: number; visibleFt?: number; reason: string; source: string };
+export type SignPlacement = {
+  text: string;
+  position: string;
+  minWidthIn: number;
+  minHeightIn: number;
+  letterHeightIn: number;
+  strokeIn?: number;
+  colors: string;
+  reason: string;
+  source: string;
+};
+
+export type MarkingsResult = {
+  sideFlags: boolean;
+  rearFlags: 0 | 1 | 2;
+  flags: FlagPlacement[];
+  lamps: LampPlacement[];
+  reflectors: { position: string; color: 'red' | 'amber'; count: number; source: string }[];
+  signs: SignPlacement[];
+  escortSigns: SignPlacement[];
+  reasons: Reason[];
+  caution: string;
+};
+
+const FLAG_SQUARE_IN = 18;
+const FLAG_COLORS = 'red or orange fluorescent';
+
+/**
+ * 49 CFR 393.87 (strict thresholds): side projection more than 4 in → flags at the extremities of the projecting
+ * side; rear projection more than 4 ft → one flag at the extreme rear if the projecting load is 2 ft wide or less,
+ * two (marking the maximum width) if wider. Corner flags, signs and night lamps come from the jurisdiction rule
+ * (the federal default rule when none is given).
+ */
+export function projectingLoadMarkings(input: MarkingsInput, rule?: JurisdictionRule): MarkingsResult {
+  const side = checkNumber('sideProjectionIn', input.sideProjectionIn, { min: 0, max: ABSURD.widthIn, unit: 'in' });
+  const left = checkNumber('sideProjectionLeftIn', input.sideProjectionLeftIn ?? side, { min: 0, max: ABSURD.widthIn, unit: 'in' });
+  const right = checkNumber('sideProjectionRightIn', input.sideProjectionRightIn ?? side, { min: 0, max: ABSURD.widthIn, unit: 'in' });
+  const rear = checkNumber('rearProjectionIn', input.rearProjectionIn, { min: 0, max: ABSURD.lengthIn, unit: 'in' });
+  const rearWidth = checkNumber('rearProjectionWidthIn', input.rearProjectionWidthIn, { min: 0, max: ABSURD.widthIn, unit: 'in' });
+  const flags: FlagPlacement[] = [];
+  const reasons: Reason[] = [];
+  const src87 = SOURCES.cfr393_87;
+
+  const sideFlags = Math.max(side, left, right) > 4;
+  if (sideFlags) {
+    const sides: [string, number][] = input.sideProjectionLeftIn !== undefined || input.sideProjectionRightIn !== undefined
+      ? [['left', left], ['right', right]]
+      : [['projecting side', side]];
+    for (const [name, amount] of sides) {
+      if (amount <= 4) continue;
+      const reason = `load extends ${formatFeetInches(amount, 4)} beyond the ${name === 'projecting side' ? 'side' : `${name} side`} (more than 4 in)`;
+      flags.push({ position: `${name}, front extremity of the projection`, minSquareIn: FLAG_SQUARE_IN, colors: FLAG_COLORS, reason, source: src87 });
+      flags.push({ position: `${name}, rear extremity of the projection`, minSquareIn: FLAG_SQUARE_IN, colors: FLAG_COLORS, reason, source: src87 });
+      reasons.push({ code: 'side-flags', message: reason, value: amount, limit: 4, unit: 'in', source: src87 });
+    }
+  }
+  let rearFlags: 0 | 1 | 2 = 0;
+  if (rear > 48) {
+    rearFlags = rearWidth > 24 ? 2 : 1;
+    const reason = `load extends ${formatFeetInches(rear, 4)} beyond the rear (more than 4 ft); projecting part ${formatFeetInches(rearWidth, 4)} wide`;
+    if (rearFlags === 1) {
+      flags.push({ position: 'extreme rear of the load', minSquareIn: FLAG_SQUARE_IN, colors: FLAG_COLORS, reason: `${reason}: one flag (2 ft wide or less)`, source: src87 });
+    } else {
+      for (const s of ['left', 'right']) {
+        flags.push({
+          position: `extreme rear of the load, ${s} edge (marks the maximum width)`,
+          minSquareIn: FLAG_SQUARE_IN,
+          colors: FLAG_COLORS,
+          reason: `${reason}: two flags (wider than 2 ft)`,
+          source: src87,
+        });
+      }
+    }
+    reasons.push({ code: 'rear-flags', message: `${reason}: ${rearFlags} flag${rearFlags === 1 ? '' : 's'}`, value: rear, limit: 48, unit: 'in', source: src87 });
+  }
+
+  const r = rule ?? FEDERAL_DEFAULT_RULE;
+  const m: MeasuredLoad = {
+    widthIn: input.widthIn ?? 0,
+    heightIn: input.heightIn ?? 0,
+    lengthIn: input.lengthIn ?? 0,
+    frontOverhangIn: input.frontOverhangIn ?? 0,
+    rearOverhangIn: rear,
+    sideProjectionIn: Math.max(side, left, right),
+    grossLb: input.grossLb ?? 0,
+  };
+  const oversize = input.widthIn !== undefined && dimensionsOverLegal(r.legal, m).length > 0;
+  const fires = (when: Trigger[], whenOversize?: boolean): boolean =>
+    (whenOversize === true && oversize) || when.some((t) => triggerFires(t, m));
+
+  for (const fr of r.flags) {
+    if (!fires(fr.when, fr.whenOversize)) continue;
+    const why = fr.whenOversize && oversize ? 'oversize load' : 'projecting load';
+    const positions =
+      fr.kind === 'corners'
+        ? ['front left corner', 'front right corner', 'rear left corner', 'rear right corner']
+        : fr.kind === 'width-extremities'
+          ? Array.from({ length: fr.minCount }, (_, i) => `widest extremity, flag ${i + 1}${fr.maxCount ? ` (${fr.minCount}–${fr.maxCount})` : ''}`)
+          : Array.from({ length: fr.minCount }, (_, i) => `end of the overhang, flag ${i + 1}`);
+    for (const position of positions) {
+      flags.push({ position, minSquareIn: fr.minSquareIn, colors: fr.colors, reason: `${r.name}: ${why}`, source: cite(fr.source) });
+    }
+    reasons.push({ code: `flags-${fr.kind}`, message: `${r.name}: ${fr.kind} flags (${why})`, source: cite(fr.source), sample: fr.source.sample });
+  }
+
+  const lamps: LampPlacement[] = [];
+  const reflectors: MarkingsResult['reflectors'] = [];
+  const lampRules = rule && rule !== FEDERAL_DEFAULT_RULE ? [...FEDERAL_DEFAULT_RULE.lamps, ...rule.lamps] : FEDERAL_DEFAULT_RULE.lamps;
+  for (const lr of lampRules) {
+    if (!fires(lr.when)) continue;
+    const reason = `${lr.note ?? 'at night'}: ${lr.when.map((t) => `${t.measure} ${t.over !== undefined ? `over ${t.over}` : `at least ${t.atLeast}`} in`).join(' or ')}`;
+    for (const l of lr.lamps) lamps.push({ ...l, reason, source: cite(lr.source) });
+    for (const rf of lr.reflectors ?? []) reflectors.push({ ...rf, source: cite(lr.source) });
+    reasons.push({ code: 'lamps', message: `lamps ${reason}`, source: cite(lr.source), sample: lr.source.sample });
+  }
+
+  const signs: SignPlacement[] = [];
+  const escortSigns: SignPlacement[] = [];
+  for (const sr of r.signs) {
+    if (!fires(sr.when, sr.whenOversize)) continue;
+    const reason = sr.whenOversize && oversize ? `${r.name}: oversize load` : `${r.name}: ${describeSignTrigger(sr)}`;
+    for (const position of sr.positions) signs.push(signAt(sr, position, reason));
+    if (sr.escortSign) {
+      escortSigns.push({
+        ...sr.escortSign,
+        position: 'each escort vehicle',
+        colors: sr.colors,
+        reason,
+        source: cite(sr.source),
+      });
+    }
+    reasons.push({ code: 'signs', message: `${sr.text} signs: ${reason}`, source: cite(sr.source), sample: sr.source.sample });
+  }
+  return { sideFlags, rearFlags, flags, lamps, reflectors, signs, escortSigns, reasons, caution: PLANNING_CAUTION };
+}
+
+function signAt(sr: SignRule, position: string, reason: string): SignPlacement {
+  return {
+    text: sr.text,
+    position,
+    minWidthIn: sr.minWidthIn,
+    minHeightIn: sr.minHeightIn,
+    letterHeightIn: sr.letterHeightIn,
+    ...(sr.strokeIn !== undefined ? { strokeIn: sr.strokeIn } : {}),
+    colors: sr.colors,
+    reason,
+    source: cite(sr.source),
+  };
+}
+
+function describeSignTrigger(sr: SignRule): string {
+  return sr.when.map((t) => `${t.measure} ${t.over !== undefined ? `over ${formatFeetInches(t.over)}` : `at least ${formatFeetInches(t.atLeast ?? 0)}`}`).join(' or ');
+}

@@ -1,0 +1,238 @@
+/** Legal travel windows for one day in one jurisdiction. */
+import { HOLIDAY_NAMES, holidayDayNumber, observedDayNumber } from './holidays';
+import { JurisdictionRule, TravelRules, cite } from './jurisdiction-rule';
+import { Reason } from './reasons';
+import { sunTimesMs, checkLatLon } from './sun-times';
+import { checkTimeZone, dayNumberOf, localClock, weekdayOf, zoneOffsetMinutes, zonedTimeToUtc } from './time-zone';
+import { parseIsoDate } from './validate';
+
+const MIN = 60_000;
+
+export type TravelLoadFacts = {
+  /** Over legal weight only (no dimension over legal). */
+  overweightOnly?: boolean;
+  /** Over legal length only (no other dimension or weight over legal). */
+  overlengthOnly?: boolean;
+  lengthIn?: number;
+};
+
+export type TravelWindowsInput = {
+  date: string;
+  lat: number;
+  lon: number;
+  /** IANA zone of the segment, e.g. America/Chicago. */
+  timeZone: string;
+  /** A whole rulebook record or just its travel rules. */
+  rule: JurisdictionRule | TravelRules;
+  /** Inside city or town limits (urban curfews apply). */
+  urban?: boolean;
+  load?: TravelLoadFacts;
+  /** The permit's validity window (inclusive dates). */
+  permitValidity?: { from: string; to: string };
+};
+
+export type TravelInterval = {
+  /** UTC instants (ISO). */
+  start: string;
+  end: string;
+  /** Local wall-clock `HH:MM` in the segment's zone. */
+  startLocal: string;
+  endLocal: string;
+};
+
+export type TravelWindowsResult = {
+  date: string;
+  timeZone: string;
+  allowed: boolean;
+  intervals: TravelInterval[];
+  sunrise: string | null;
+  sunset: string | null;
+  /** Why time was taken away (weekend, holiday, curfew, outside daylight, permit validity). */
+  restrictions: Reason[];
+  reasons: Reason[];
+};
+
+type Span = [number, number];
+
+function subtract(spans: Span[], cut: Span): Span[] {
+  const out: Span[] = [];
+  for (const [a, b] of spans) {
+    if (cut[1] <= a || cut[0] >= b) {
+      out.push([a, b]);
+      continue;
+    }
+    if (cut[0] > a) out.push([a, cut[0]]);
+    if (cut[1] < b) out.push([cut[1], b]);
+  }
+  return out;
+}
+
+function parseClock(field: string, hhmm: string): number {
+  const m = /^(\d{2}):(\d{2})$/.exec(hhmm);
+  const minutes = m ? Number(m[1]) * 60 + Number(m[2]) : NaN;
+  if (!m || Number(m[2]) > 59 || minutes > 24 * 60) throw new RangeError(`${field} must be a HH:MM time; got "${hhmm}"`);
+  return minutes;
+}
+
+const isTravelRules = (r: JurisdictionRule | TravelRules): r is TravelRules => !('travel' in r);
+
+/**
+ * Allowed travel intervals for one local day: daylight with the rule's offsets, weekend rule, holiday list with its
+ * start convention (e.g. from noon the weekday before), urban curfews and the permit's validity window.
+ */
+export function travelWindows(input: TravelWindowsInput): TravelWindowsResult {
+  const { y, m, d } = parseIsoDate('date', input.date);
+  checkLatLon(input.lat, input.lon);
+  const tz = checkTimeZone(input.timeZone);
+  const travel = isTravelRules(input.rule) ? input.rule : input.rule.travel;
+  const who = isTravelRules(input.rule) ? 'travel rule' : input.rule.name;
+  const day = dayNumberOf(y, m, d);
+  const dow = weekdayOf(day);
+  const restrictions: Reason[] = [];
+  const reasons: Reason[] = [];
+
+  const dayStart = zonedTimeToUtc(day, 0, tz);
+  const dayEnd = zonedTimeToUtc(day + 1, 0, tz);
+  // Within a day with one offset, wall-clock times are plain additions from midnight.
+  const steady = zoneOffsetMinutes(tz, dayStart) === zoneOffsetMinutes(tz, dayEnd - 1);
+  const at = (dayNum: number, minutes: number): number =>
+    dayNum === day && steady ? dayStart + minutes * MIN : zonedTimeToUtc(dayNum, minutes, tz);
+
+  const sun = sunTimesMs(y, m, d, input.lat, input.lon);
+  let spans: Span[] = [[dayStart, dayEnd]];
+
+  if (travel.daylight) {
+    const dl = travel.daylight;
+    let from: number;
+    let to: number;
+    if (sun.sunrise !== null && sun.sunset !== null) {
+      from = sun.sunrise + dl.startOffsetMin * MIN;
+      to = sun.sunset + dl.endOffsetMin * MIN;
+    } else {
+      from = sun.alwaysUp ? dayStart : dayEnd;
+      to = sun.alwaysUp ? dayEnd : dayEnd;
+    }
+    const fmtOff = (o: number, what: string): string => (o === 0 ? what : `${Math.abs(o)} min ${o < 0 ? 'before' : 'after'} ${what}`);
+    const msg = `${who}: daylight travel only, ${fmtOff(dl.startOffsetMin, 'sunrise')} to ${fmtOff(dl.endOffsetMin, 'sunset')} (${localClock(
+      Math.max(from, dayStart),
+      tz,
+    )}–${localClock(Math.min(to, dayEnd - 1), tz)})`;
+    spans = subtract(subtract(spans, [dayStart, Math.max(dayStart, from)]), [Math.min(to, dayEnd), dayEnd]);
+    restrictions.push({ code: 'daylight', message: msg, source: cite(dl.source), sample: dl.source.sample });
+  }
+
+  if (!travel.weekends.allowed && (dow === 0 || dow === 6)) {
+    spans = [];
+    restrictions.push({
+      code: 'weekend',
+      message: `${who}: no travel on ${dow === 0 ? 'Sunday' : 'Saturday'}`,
+      source: cite(travel.weekends.source),
+      sample: travel.weekends.source.sample,
+    });
+  }
+
+  const hol = travel.holidays;
+  if (hol.names.length > 0 && spans.length > 0) {
+    const years = m === 12 ? [y, y + 1] : m === 1 ? [y - 1, y] : [y];
+    const seen = new Set<string>();
+    for (const name of hol.names) {
+      for (const yr of years) {
+        const actual = holidayDayNumber(name, yr);
+        const dates = hol.observance === 'actual' ? [actual] : hol.observance === 'observed' ? [observedDayNumber(actual)] : [actual, observedDayNumber(actual)];
+        for (const h of dates) {
+          const key = `${name}|${h}`;
+          if (h < day || h > day + 5 || seen.has(key)) continue;
+          seen.add(key);
+          let startDay = h;
+          let startMin = 0;
+          if (hol.from === 'noon-day-before') {
+            startDay = h - 1;
+            startMin = 12 * 60;
+          } else if (hol.from === 'noon-weekday-before') {
+            startDay = h - 1;
+            while (weekdayOf(startDay) === 0 || weekdayOf(startDay) === 6) startDay -= 1;
+            startMin = 12 * 60;
+          }
+          if (day < startDay || day > h) continue;
+          const cut: Span = [at(startDay, startMin), at(h + 1, 0)];
+          spans = subtract(spans, cut);
+          const label = `${HOLIDAY_NAMES[name]}${h !== actual ? ' (observed)' : ''}`;
+          const when =
+            hol.from === 'day-only'
+              ? 'the holiday itself'
+              : `from noon ${hol.from === 'noon-weekday-before' ? 'the weekday' : 'the day'} before through the holiday`;
+          restrictions.push({
+            code: 'holiday',
+            message: `${who}: no travel for ${label}, ${when}`,
+            source: cite(hol.source),
+            sample: hol.source.sample,
+          });
+        }
+      }
+    }
+  }
+
+  for (const c of travel.curfews) {
+    if (spans.length === 0) break;
+    if (c.appliesIn === 'urban' && !input.urban) continue;
+    if (c.days && !c.days.includes(dow)) continue;
+    const load = input.load ?? {};
+    if (c.exempt?.overweightOnly && load.overweightOnly) {
+      reasons.push({ code: 'curfew-exempt', message: `${who}: curfew ${c.start}–${c.end} does not apply to an overweight-only load`, source: cite(c.source) });
+      continue;
+    }
+    if (c.exempt?.overlengthOnlyMaxIn !== undefined && load.overlengthOnly && (load.lengthIn ?? Infinity) <= c.exempt.overlengthOnlyMaxIn) {
+      reasons.push({ code: 'curfew-exempt', message: `${who}: curfew ${c.start}–${c.end} does not apply to an overlength-only load of this length`, source: cite(c.source) });
+      continue;
+    }
+    const cut: Span = [at(day, parseClock('curfew.start', c.start)), at(day, parseClock('curfew.end', c.end))];
+    spans = subtract(spans, cut);
+    restrictions.push({
+      code: 'curfew',
+      message: `${who}: ${c.appliesIn === 'urban' ? 'urban ' : ''}curfew, no travel ${c.start}–${c.end}`,
+      source: cite(c.source),
+      sample: c.source.sample,
+    });
+  }
+
+  if (input.permitValidity) {
+    const from = parseIsoDate('permitValidity.from', input.permitValidity.from);
+    const to = parseIsoDate('permitValidity.to', input.permitValidity.to);
+    const fromDay = dayNumberOf(from.y, from.m, from.d);
+    const toDay = dayNumberOf(to.y, to.m, to.d);
+    if (toDay < fromDay) throw new RangeError('permitValidity.to must not be before permitValidity.from');
+    if (day < fromDay || day > toDay) {
+      spans = [];
+      restrictions.push({ code: 'permit-validity', message: `outside the permit's validity (${input.permitValidity.from} to ${input.permitValidity.to})`, source: 'issued permit' });
+    }
+  }
+
+  if (travel.minVisibilityFt) {
+    reasons.push({
+      code: 'visibility',
+      message: `${who}: no movement when visibility is reduced to ${travel.minVisibilityFt.value} ft`,
+      value: travel.minVisibilityFt.value,
+      unit: 'ft',
+      source: cite(travel.minVisibilityFt.source),
+    });
+  }
+
+  const intervals: TravelInterval[] = spans
+    .filter(([a, b]) => b - a >= MIN)
+    .map(([a, b]) => ({
+      start: new Date(a).toISOString(),
+      end: new Date(b).toISOString(),
+      startLocal: localClock(a, tz),
+      endLocal: b === dayEnd ? '24:00' : localClock(b, tz),
+    }));
+  return {
+    date: input.date,
+    timeZone: tz,
+    allowed: intervals.length > 0,
+    intervals,
+    sunrise: sun.sunrise === null ? null : new Date(sun.sunrise).toISOString(),
+    sunset: sun.sunset === null ? null : new Date(sun.sunset).toISOString(),
+    restrictions,
+    reasons: [...restrictions, ...reasons],
+  };
+}

@@ -1,0 +1,55 @@
+import { Suspense, useMemo } from 'react';
+import { Button, Grid, Layout, Menu, Space, Tag, Typography } from 'antd';
+import { Link, Outlet, useLocation } from 'react-router-dom';
+import { ROLE_LABELS } from '@amberline/common';
+import { BrandMark } from '../../components/brand-mark';
+import { PageSpinner } from '../../components/page-spinner';
+import { navigationFor } from '../navigation';
+import { useAuth } from '../../lib/auth';
+
+export function AppShell() {
+  const { user, signOut } = useAuth();
+  const location = useLocation();
+  const screens = Grid.useBreakpoint();
+  const items = useMemo(() => navigationFor(user?.role), [user?.role]);
+  const selected = items
+    .filter((i) => (i.path === '/' ? location.pathname === '/' : location.pathname.startsWith(i.path)))
+    .map((i) => i.path);
+
+  return (
+    <Layout style={{ minHeight: '100vh' }}>
+      <Layout.Header className="no-print" style={{ display: 'flex', alignItems: 'center', gap: 16, paddingInline: 16 }}>
+        <Link to="/" style={{ display: 'flex', alignItems: 'center', gap: 8, color: '#fff' }}>
+          <BrandMark />
+          <Typography.Text strong style={{ color: '#fff', fontSize: 18 }}>
+            Amberline
+          </Typography.Text>
+        </Link>
+        <Menu
+          theme="dark"
+          mode="horizontal"
+          selectedKeys={selected}
+          style={{ flex: 1, minWidth: 0, background: 'transparent' }}
+          items={items.map((i) => ({ key: i.path, label: <Link to={i.path}>{i.label}</Link> }))}
+          data-testid="main-nav"
+        />
+        {user && (
+          <Space size="small">
+            {screens.md && <Typography.Text style={{ color: '#e2e8f0' }}>{user.name}</Typography.Text>}
+            <Tag color="gold" data-testid="current-role">
+              {ROLE_LABELS[user.role]}
+            </Tag>
+            <Button size="small" onClick={signOut}>
+              Sign out
+            </Button>
+          </Space>
+        )}
+      </Layout.Header>
+      <Layout.Content style={{ padding: screens.md ? 24 : 12 }}>
+        <Suspense fallback={<PageSpinner />}>
+          <Outlet />
+        </Suspense>
+      </Layout.Content>
+    </Layout>
+  );
+}

@@ -1,0 +1,11 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { UpdateUserRequest, UserDto } from '@amberline/common';
+import { api } from '../../../lib/api-client';
+
+export const updateUser = ({ id, ...body }: UpdateUserRequest & { id: string }) =>
+  api<UserDto>(`/users/${id}`, { method: 'PATCH', json: body });
+
+export const useUpdateUser = () => {
+  const qc = useQueryClient();
+  return useMutation({ mutationFn: updateUser, onSuccess: () => qc.invalidateQueries({ queryKey: ['users'] }) });
+};

@@ -1,0 +1,3 @@
+export * from './db';
+export * from './builders/user';
+export * from './scenarios/demo';
