@@ -11,11 +11,11 @@ stale() { # stale <output-file> <dir>...: true when the output is missing or old
 if stale common/dist/index.js common/src common/tsconfig.json common/tsconfig.build.json; then
   echo "build: common"; npm run -s build -w common
 fi
-if stale backend/dist/main.js backend/src common/dist; then
-  echo "build: backend"; npm run -s build -w backend
-fi
 if stale seed/dist/run.js seed/src common/dist; then
   echo "build: seed"; npm run -s build -w seed
+fi
+if stale backend/dist/main.js backend/src common/dist seed/dist; then
+  echo "build: backend"; npm run -s build -w backend
 fi
 if [ "${SKIP_FRONTEND_BUILD:-}" != 1 ] && stale frontend/dist/index.html frontend/src frontend/index.html frontend/vite.config.ts common/src; then
   echo "build: frontend"; npm run -s build -w frontend >/dev/null

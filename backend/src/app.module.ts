@@ -13,6 +13,10 @@ import { createValidationPipe } from './core/validation.pipe';
 import { typeormOptions } from './database/typeorm-options';
 import { HealthModule } from './health/health.module';
 import { UsersModule } from './users/users.module';
+import { AuditModule } from './audit/audit.module';
+import { FleetModule } from './fleet/fleet.module';
+import { MovesModule } from './moves/moves.module';
+import { RulebookModule } from './rulebook/rulebook.module';
 
 function frontendModules(): DynamicModule[] {
   const dist = resolve(process.env.FRONTEND_DIST ?? join(__dirname, '..', '..', 'frontend', 'dist'));
@@ -36,6 +40,10 @@ function frontendModules(): DynamicModule[] {
     HealthModule,
     UsersModule,
     AuthModule,
+    AuditModule,
+    FleetModule,
+    RulebookModule,
+    MovesModule,
   ],
   providers: [
     { provide: APP_PIPE, useFactory: createValidationPipe },

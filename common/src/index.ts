@@ -4,3 +4,7 @@ export * from './errors/error-codes';
 export * from './validation/limits';
 export * from './types/auth';
 export * from './engine';
+export * from './types/fleet';
+export * from './types/rulebook';
+export * from './types/moves';
+export * from './geo/jurisdictions';

@@ -5,7 +5,7 @@ import { AppException } from './app-exception';
 function flatten(errors: ValidationError[], prefix = ''): FieldError[] {
   const out: FieldError[] = [];
   for (const e of errors) {
-    const field = prefix ? `${prefix}.${e.property}` : e.property;
+    const field = !prefix ? e.property : /^\d+$/.test(e.property) ? `${prefix}[${e.property}]` : `${prefix}.${e.property}`;
     for (const reason of Object.values(e.constraints ?? {})) out.push({ field, reason });
     if (e.children?.length) out.push(...flatten(e.children, field));
   }

@@ -87,15 +87,25 @@ export function checkAxleWeights(axles: AxleInput[], limits: Partial<AxleLimits>
     }
   }
   const src = lim.source;
+  const srcUnit = `${src}; ${SOURCES.cfr658_5}`;
+  const srcBridge = `${src}; ${SOURCES.bridgeTable}`;
   const groups: AxleGroupCheck[] = [];
-  const push = (g: Omit<AxleGroupCheck, 'ok' | 'overByLb' | 'message'>, what: string): void => {
-    const over = Math.max(0, g.weightLb - g.limitLb);
+  const push = (
+    fromAxle: number,
+    toAxle: number,
+    axleCount: number,
+    distanceFt: number,
+    weightLb: number,
+    limitLb: number,
+    rule: AxleGroupRule,
+    source: string,
+    what: string,
+  ): void => {
+    const over = weightLb > limitLb ? weightLb - limitLb : 0;
     const ok = over <= EPS;
-    const span = g.fromAxle === g.toAxle ? `axle ${g.fromAxle}` : `axles ${g.fromAxle}–${g.toAxle}`;
-    const message = `${span} (${what}): ${formatPounds(g.weightLb)} against ${formatPounds(g.limitLb)}${
-      ok ? '' : `, over by ${formatPounds(over)}`
-    }`;
-    groups.push({ ...g, ok, overByLb: over, message });
+    const span = fromAxle === toAxle ? `axle ${fromAxle}` : `axles ${fromAxle}–${toAxle}`;
+    const message = `${span} (${what}): ${formatPounds(weightLb)} against ${formatPounds(limitLb)}${ok ? '' : `, over by ${formatPounds(over)}`}`;
+    groups.push({ fromAxle, toAxle, axleCount, distanceFt, weightLb, limitLb, rule, ok, overByLb: over, message, source });
   };
 
   // Single-axle units: consecutive axles whose extreme centres are within 40 in.
@@ -110,19 +120,7 @@ export function checkAxleWeights(axles: AxleInput[], limits: Partial<AxleLimits>
     }
   }
   for (const u of units) {
-    push(
-      {
-        fromAxle: u.first + 1,
-        toAxle: u.last + 1,
-        axleCount: u.last - u.first + 1,
-        distanceFt: pos[u.last] - pos[u.first],
-        weightLb: u.weightLb,
-        limitLb: lim.singleAxleLb,
-        rule: 'single',
-        source: `${src}; ${SOURCES.cfr658_5}`,
-      },
-      'single axle',
-    );
+    push(u.first + 1, u.last + 1, u.last - u.first + 1, pos[u.last] - pos[u.first], u.weightLb, lim.singleAxleLb, 'single', srcUnit, 'single axle');
   }
 
   // Groups of two or more consecutive units.
@@ -133,15 +131,11 @@ export function checkAxleWeights(axles: AxleInput[], limits: Partial<AxleLimits>
       weight += units[j].weightLb;
       const span = spanIn(i, j);
       const distanceFt = span / 12;
-      const base = {
-        fromAxle: units[i].first + 1,
-        toAxle: units[j].last + 1,
-        axleCount: units[j].last - units[i].first + 1,
-        distanceFt,
-        weightLb: weight,
-      };
+      const fromAxle = units[i].first + 1;
+      const toAxle = units[j].last + 1;
+      const axleCount = units[j].last - units[i].first + 1;
       if (span <= TANDEM_MAX_IN + EPS) {
-        push({ ...base, limitLb: lim.tandemLb, rule: 'tandem', source: `${src}; ${SOURCES.cfr658_5}` }, 'tandem');
+        push(fromAxle, toAxle, axleCount, distanceFt, weight, lim.tandemLb, 'tandem', srcUnit, 'tandem');
         continue;
       }
       if (!lim.bridgeFormula) continue;
@@ -163,7 +157,14 @@ export function checkAxleWeights(axles: AxleInput[], limits: Partial<AxleLimits>
         }
       }
       push(
-        { ...base, limitLb, rule, source: rule === 'bridge-formula' ? `${src}; ${SOURCES.bridgeTable}` : src },
+        fromAxle,
+        toAxle,
+        axleCount,
+        distanceFt,
+        weight,
+        limitLb,
+        rule,
+        rule === 'bridge-formula' ? srcBridge : src,
         rule === 'bridge-formula'
           ? `bridge formula, L = ${L} ft, N = ${n}`
           : `two consecutive tandems ${round1(distanceFt)} ft apart (≥ ${lim.tandemPairMinFt} ft)`,
@@ -172,19 +173,7 @@ export function checkAxleWeights(axles: AxleInput[], limits: Partial<AxleLimits>
   }
 
   const grossLb = wt.reduce((s, w) => s + w, 0);
-  push(
-    {
-      fromAxle: 1,
-      toAxle: pos.length,
-      axleCount: pos.length,
-      distanceFt: pos[pos.length - 1] - pos[0],
-      weightLb: grossLb,
-      limitLb: lim.grossLb,
-      rule: 'gross',
-      source: src,
-    },
-    'gross',
-  );
+  push(1, pos.length, pos.length, pos[pos.length - 1] - pos[0], grossLb, lim.grossLb, 'gross', src, 'gross');
 
   const violations = groups.filter((g) => !g.ok);
   const reasons: Reason[] = violations.map((g) => ({

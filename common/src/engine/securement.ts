@@ -232,3 +232,22 @@ export function checkSecurement(input: SecurementInput): SecurementResult {
   }
   return { requiredCount, count, requiredAggregateLb, aggregateLb, ok, findings, reasons, credited, caution: PLANNING_CAUTION };
 }
+
+/** 49 CFR 393.102 performance criteria (fractions of g; downward force as a fraction of the article's weight). */
+export const SECUREMENT_PERFORMANCE = {
+  breakingStrength: { forward: 0.8, rearward: 0.5, lateral: 0.5 },
+  workingLoadLimit: { forward: 0.435, rearward: 0.5, lateral: 0.25 },
+  downwardFractionIfNotContained: 0.2,
+  source: SOURCES.cfr393_102,
+} as const;
+
+/**
+ * Typical anchor-point ratings on an open-deck trailer, for fleet defaults when the trailer's own ratings are not
+ * on file (common practice, no published source). A tiedown anchored there is credited at most this rating.
+ */
+export const TYPICAL_ANCHOR_WLL = {
+  slidingWinch: 6_600,
+  pipeSpool: 6_600,
+  stakePocket: 5_000,
+  source: SOURCES.practice,
+} as const;

@@ -62,7 +62,12 @@ export function formatFeetInches(inches: number, precision: FeetInchesPrecision 
 /** Groups thousands with commas, independent of the runtime's locale. */
 function groupThousands(n: number): string {
   const s = String(Math.abs(n));
-  return (n < 0 ? '-' : '') + s.replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+  let out = '';
+  for (let i = 0; i < s.length; i++) {
+    if (i > 0 && (s.length - i) % 3 === 0) out += ',';
+    out += s[i];
+  }
+  return n < 0 ? `-${out}` : out;
 }
 
 /** `formatPounds(80000)` → `80,000 lb` (rounded to the whole pound). */

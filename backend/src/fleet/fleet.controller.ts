@@ -1,0 +1,72 @@
+import { Body, Controller, Get, Param, ParseIntPipe, ParseUUIDPipe, Post, Put, Query } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import type { SessionUser, TractorDto, TrailerDto } from '@amberline/common';
+import { CurrentUser } from '../core/decorators/current-user.decorator';
+import { Roles } from '../core/decorators/roles.decorator';
+import { TractorInputDto, TrailerInputDto } from './dto/fleet.dto';
+import { FleetService, toTractorDto, toTrailerDto } from './fleet.service';
+
+@ApiTags('fleet')
+@ApiBearerAuth()
+@Controller('fleet')
+export class FleetController {
+  constructor(private readonly fleet: FleetService) {}
+
+  @Get('tractors')
+  @Roles('admin', 'dispatcher', 'permit_clerk')
+  tractors(): Promise<TractorDto[]> {
+    return this.fleet.listTractors();
+  }
+
+  @Get('tractors/:id')
+  @Roles('admin', 'dispatcher', 'permit_clerk')
+  async tractor(@Param('id', new ParseUUIDPipe()) id: string): Promise<TractorDto> {
+    return toTractorDto(await this.fleet.tractor(id));
+  }
+
+  @Post('tractors')
+  @Roles('admin')
+  createTractor(@Body() dto: TractorInputDto, @CurrentUser() user: SessionUser): Promise<TractorDto> {
+    return this.fleet.saveTractor(dto, user);
+  }
+
+  @Put('tractors/:id')
+  @Roles('admin')
+  updateTractor(
+    @Param('id', new ParseUUIDPipe()) id: string,
+    @Query('version', new ParseIntPipe({ optional: true })) version: number | undefined,
+    @Body() dto: TractorInputDto,
+    @CurrentUser() user: SessionUser,
+  ): Promise<TractorDto> {
+    return this.fleet.saveTractor(dto, user, id, version);
+  }
+
+  @Get('trailers')
+  @Roles('admin', 'dispatcher', 'permit_clerk')
+  trailers(): Promise<TrailerDto[]> {
+    return this.fleet.listTrailers();
+  }
+
+  @Get('trailers/:id')
+  @Roles('admin', 'dispatcher', 'permit_clerk')
+  async trailer(@Param('id', new ParseUUIDPipe()) id: string): Promise<TrailerDto> {
+    return toTrailerDto(await this.fleet.trailer(id));
+  }
+
+  @Post('trailers')
+  @Roles('admin')
+  createTrailer(@Body() dto: TrailerInputDto, @CurrentUser() user: SessionUser): Promise<TrailerDto> {
+    return this.fleet.saveTrailer(dto, user);
+  }
+
+  @Put('trailers/:id')
+  @Roles('admin')
+  updateTrailer(
+    @Param('id', new ParseUUIDPipe()) id: string,
+    @Query('version', new ParseIntPipe({ optional: true })) version: number | undefined,
+    @Body() dto: TrailerInputDto,
+    @CurrentUser() user: SessionUser,
+  ): Promise<TrailerDto> {
+    return this.fleet.saveTrailer(dto, user, id, version);
+  }
+}

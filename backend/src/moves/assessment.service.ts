@@ -1,0 +1,124 @@
+import { Injectable } from '@nestjs/common';
+import {
+  defaultWll, PLANNING_CAUTION, planCheck, ANCHOR_KIND_LABELS,
+  type AssessmentDto, type MoveArticle, type PlanArticle, type PlanCheckResult, type PlanInput, type RouteSegmentDto, type TiedownSpec,
+} from '@amberline/common';
+import { fieldError } from '../core/app-exception';
+import type { Tractor } from '../fleet/entities/tractor.entity';
+import type { Trailer } from '../fleet/entities/trailer.entity';
+import { RulebookService } from '../rulebook/rulebook.service';
+import type { MoveSummary } from './entities/move.entity';
+
+/** The facts of a plan, whether saved on a move or still a draft. */
+export type PlanFacts = {
+  articles: MoveArticle[];
+  route: RouteSegmentDto[];
+  requestedDeparture: string;
+  travelDays: number;
+  sliderSettingFt?: number | null;
+  tractor: Tractor;
+  trailer: Trailer;
+};
+
+/** Each day of travel, `YYYY-MM-DD`, from the departure date. */
+export function travelDates(departure: string, days: number): string[] {
+  const start = Date.parse(`${departure}T00:00:00Z`);
+  return Array.from({ length: days }, (_, i) => new Date(start + i * 86_400_000).toISOString().slice(0, 10));
+}
+
+/** Resolves one planned tiedown to the WLL the engine credits, naming the field when it cannot. */
+export function resolveTiedown(t: MoveArticle['tiedowns'][number], trailer: Trailer, field: string): TiedownSpec {
+  let wllLb = t.markedWllLb;
+  if (wllLb === undefined) {
+    try {
+      if (t.kind === 'chain') wllLb = defaultWll({ kind: 'chain', size: t.chainSize ?? '', ...(t.chainGrade ? { grade: t.chainGrade } : {}) }).wllLb;
+      else if (t.kind === 'webbing') wllLb = defaultWll({ kind: 'webbing', width: t.webbingWidth ?? '' }).wllLb;
+      else throw new RangeError('give the marked WLL for this tiedown');
+    } catch (e) {
+      throw fieldError(`${field}.markedWllLb`, (e as Error).message);
+    }
+  }
+  const anchor = trailer.spec.anchorPoints.find((a) => a.kind === t.anchorKind);
+  if (!anchor) throw fieldError(`${field}.anchorKind`, `trailer ${trailer.unitNumber} has no ${ANCHOR_KIND_LABELS[t.anchorKind].toLowerCase()} anchor points`);
+  return {
+    label: t.label ?? `${t.kind}${t.chainSize ? ` ${t.chainSize}` : ''}${t.chainGrade ? ` G${t.chainGrade}` : ''}${t.webbingWidth ? ` ${t.webbingWidth} in` : ''}`,
+    wllLb,
+    anchorWllLb: anchor.wllLb,
+    anchorKind: ANCHOR_KIND_LABELS[t.anchorKind],
+    path: t.path,
+    ...(t.edgeProtection !== undefined ? { edgeProtection: t.edgeProtection } : {}),
+  };
+}
+
+/** Runs the engine's full plan check on a move's facts with the current rulebook. */
+@Injectable()
+export class AssessmentService {
+  constructor(private readonly rulebook: RulebookService) {}
+
+  async assess(facts: PlanFacts): Promise<{ result: PlanCheckResult; ruleVersions: Record<string, number> }> {
+    const codes = [...new Set(facts.route.map((s) => s.jurisdiction))];
+    const rules = await this.rulebook.currentRules(codes);
+    const plan = this.toPlanInput(facts, [...rules.values()].map((r) => r.record));
+    let result: PlanCheckResult;
+    try {
+      result = planCheck(plan);
+    } catch (e) {
+      if (e instanceof RangeError) throw fieldError(e.message.split(/[\s:]/)[0] || 'plan', e.message);
+      throw e;
+    }
+    return { result, ruleVersions: Object.fromEntries([...rules].map(([c, r]) => [c, r.version])) };
+  }
+
+  toPlanInput(f: PlanFacts, rules: PlanInput['rules']): PlanInput {
+    const tractor = f.tractor.spec;
+    const trailer = f.trailer.spec;
+    const articles: PlanArticle[] = f.articles.map((a, i) => {
+      const { description, weightSource, tiedowns, ...placed } = a;
+      void weightSource;
+      return { ...placed, description, tiedowns: tiedowns.map((t, k) => resolveTiedown(t, f.trailer, `articles[${i}].tiedowns[${k}]`)) };
+    });
+    return {
+      tractor: {
+        steerTareLb: tractor.steerTareLb,
+        driveTareLb: tractor.driveTareLb,
+        wheelbaseFt: tractor.wheelbaseFt,
+        fifthWheelAheadOfDriveFt: tractor.fifthWheelAheadOfDriveFt,
+        bumperToSteerIn: tractor.bumperToSteerIn,
+        widthIn: tractor.widthIn,
+        heightIn: tractor.heightIn,
+        driveAxleOffsetsFt: tractor.driveAxleOffsetsFt,
+      },
+      trailer: {
+        tareLb: trailer.tareLb,
+        tareCgFromKingpinFt: trailer.tareCgFromKingpinFt,
+        axleGroupFromKingpinFt: f.sliderSettingFt ?? trailer.axleGroupFromKingpinFt,
+        axleOffsetsFt: trailer.axleOffsetsFt,
+        kingpinFromFrontIn: trailer.kingpinFromFrontIn,
+        lengthIn: trailer.lengthIn,
+        widthIn: trailer.widthIn,
+        ...(trailer.heightIn ? { heightIn: trailer.heightIn } : {}),
+        decks: trailer.decks,
+        ...(trailer.slider ? { slider: trailer.slider } : {}),
+      },
+      articles,
+      route: f.route.map((s) => ({ jurisdiction: s.jurisdiction, miles: s.miles, roadType: s.roadType, urban: !!s.urban, lat: s.lat, lon: s.lon, timeZone: s.timeZone })),
+      travelDates: travelDates(f.requestedDeparture, f.travelDays),
+      rules,
+    };
+  }
+
+  toDto(moveId: string, moveVersion: number, a: { result: PlanCheckResult; ruleVersions: Record<string, number> }, now: Date): AssessmentDto {
+    return { moveId, moveVersion, computedAt: now.toISOString(), ruleVersions: a.ruleVersions, result: a.result, caution: PLANNING_CAUTION };
+  }
+}
+
+export function summarize(r: PlanCheckResult): MoveSummary {
+  return {
+    permitsNeeded: r.summary.permitsNeeded,
+    escorts: r.summary.maxEscortsFront + r.summary.maxEscortsRear,
+    superload: r.summary.superloads.length > 0,
+    overweight: r.jurisdictions.some((j) => j.overweight),
+    problems: r.summary.problems,
+    estimatedFeesUsd: r.summary.estimatedFeesUsd,
+  };
+}

@@ -1,0 +1,271 @@
+import { Injectable } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { DataSource, EntityManager, Repository } from 'typeorm';
+import {
+  MOVE_STAGES, type AssessmentDto, type HistoryEntryDto, type MoveDto, type MoveStage, type MoveSummaryDto, type MovesPage, type SessionUser, type StageCounts,
+} from '@amberline/common';
+import { AuditService, diff } from '../audit/audit.service';
+import { AppException, fieldError } from '../core/app-exception';
+import { Tractor } from '../fleet/entities/tractor.entity';
+import { Trailer } from '../fleet/entities/trailer.entity';
+import { User } from '../users/entities/user.entity';
+import { AssessmentService, summarize, travelDates } from './assessment.service';
+import { CreateMoveDto, ListMovesQuery, UpdateMoveDto } from './dto/move.dto';
+import { Move } from './entities/move.entity';
+import { MoveExtensionsRegistry } from './move-extensions';
+import { resolveRoute } from './route-geo';
+
+/** Fields whose change alters the plan (dimensions, weights, equipment, route) and so affects permits. */
+export const PLAN_FIELDS = ['articles', 'route', 'tractorId', 'trailerId', 'sliderSettingFt', 'requestedDeparture', 'travelDays'] as const;
+
+export function toMoveDto(m: Move): MoveDto {
+  return {
+    id: m.id,
+    reference: m.reference,
+    stage: m.stage,
+    version: m.version,
+    customer: m.customer,
+    ...(m.customerRef ? { customerRef: m.customerRef } : {}),
+    commodity: m.commodity,
+    articles: m.articles,
+    tractorId: m.tractorId,
+    trailerId: m.trailerId,
+    sliderSettingFt: m.sliderSettingFt,
+    route: m.route,
+    origin: m.origin,
+    destination: m.destination,
+    requestedDeparture: m.requestedDeparture,
+    travelDays: m.travelDays,
+    travelDates: travelDates(m.requestedDeparture, m.travelDays),
+    driverId: m.driverId,
+    ...(m.notes ? { notes: m.notes } : {}),
+    tractor: { id: m.tractorId, unitNumber: m.tractor?.unitNumber ?? '' },
+    trailer: { id: m.trailerId, unitNumber: m.trailer?.unitNumber ?? '', type: m.trailer?.type ?? '' },
+    driver: m.driver ? { id: m.driver.id, name: m.driver.name } : null,
+    createdAt: m.createdAt.toISOString(),
+    updatedAt: m.updatedAt.toISOString(),
+  };
+}
+
+/** What the audit trail keeps of a move (no derived or bookkeeping fields). */
+const auditView = (m: Move) => ({
+  customer: m.customer, customerRef: m.customerRef, commodity: m.commodity, stage: m.stage, tractorId: m.tractorId, trailerId: m.trailerId,
+  driverId: m.driverId, sliderSettingFt: m.sliderSettingFt, articles: m.articles, route: m.route, origin: m.origin, destination: m.destination,
+  requestedDeparture: m.requestedDeparture, travelDays: m.travelDays, notes: m.notes,
+});
+
+/** Today's date where the day starts last in the contiguous US (Pacific), `YYYY-MM-DD`. */
+export function earliestAllowedDeparture(now: Date): string {
+  return new Intl.DateTimeFormat('en-CA', { timeZone: 'America/Los_Angeles', year: 'numeric', month: '2-digit', day: '2-digit' }).format(now);
+}
+
+@Injectable()
+export class MovesService {
+  constructor(
+    private readonly ds: DataSource,
+    private readonly audit: AuditService,
+    private readonly assessments: AssessmentService,
+    private readonly extensions: MoveExtensionsRegistry,
+    @InjectRepository(Move) private readonly moves: Repository<Move>,
+  ) {}
+
+  /** Loads a move with its equipment and driver. Drivers may only see moves assigned to them. */
+  async get(id: string, viewer?: SessionUser, manager?: EntityManager): Promise<Move> {
+    const repo = manager ? manager.getRepository(Move) : this.moves;
+    const m = await repo.findOne({ where: { id }, relations: { tractor: true, trailer: true, driver: true } });
+    if (!m || (viewer?.role === 'driver' && m.driverId !== viewer.id)) throw new AppException(404, 'not_found', `No move ${id}`);
+    return m;
+  }
+
+  private async equipment(m: EntityManager, tractorId: string, trailerId: string): Promise<{ tractor: Tractor; trailer: Trailer }> {
+    const tractor = await m.findOneBy(Tractor, { id: tractorId });
+    if (!tractor || !tractor.active) throw fieldError('tractorId', 'no active tractor with this id');
+    const trailer = await m.findOneBy(Trailer, { id: trailerId });
+    if (!trailer || !trailer.active) throw fieldError('trailerId', 'no active trailer with this id');
+    return { tractor, trailer };
+  }
+
+  private async checkDriver(m: EntityManager, driverId: string | null | undefined): Promise<void> {
+    if (!driverId) return;
+    const d = await m.findOneBy(User, { id: driverId });
+    if (!d || d.role !== 'driver' || !d.active) throw fieldError('driverId', 'no active driver with this id');
+  }
+
+  private checkPlanFields(dto: Partial<CreateMoveDto>, trailer: Trailer, now: Date, departureChanged: boolean): void {
+    if (dto.sliderSettingFt !== undefined && dto.sliderSettingFt !== null) {
+      const s = trailer.spec.slider;
+      if (!s) throw fieldError('sliderSettingFt', `trailer ${trailer.unitNumber} has no sliding axle`);
+      if (dto.sliderSettingFt < s.minFromKingpinFt || dto.sliderSettingFt > s.maxFromKingpinFt) {
+        throw fieldError('sliderSettingFt', `must be within the trailer's sliding range, ${s.minFromKingpinFt}–${s.maxFromKingpinFt} ft behind the kingpin`);
+      }
+    }
+    if (departureChanged && dto.requestedDeparture) {
+      if (Number.isNaN(Date.parse(`${dto.requestedDeparture}T00:00:00Z`))) throw fieldError('requestedDeparture', 'is not a real date');
+      if (dto.requestedDeparture < earliestAllowedDeparture(now)) throw fieldError('requestedDeparture', 'is in the past');
+    }
+  }
+
+  async preview(dto: CreateMoveDto, now: Date): Promise<AssessmentDto> {
+    const { tractor, trailer } = await this.equipment(this.ds.manager, dto.tractorId, dto.trailerId);
+    this.checkPlanFields(dto, trailer, now, false);
+    const route = resolveRoute(dto.route);
+    const a = await this.assessments.assess({ ...dto, route, tractor, trailer });
+    return this.assessments.toDto('draft', 0, a, now);
+  }
+
+  async create(dto: CreateMoveDto, actor: SessionUser, now: Date): Promise<MoveDto> {
+    const route = resolveRoute(dto.route);
+    const id = await this.ds.transaction(async (m) => {
+      const { tractor, trailer } = await this.equipment(m, dto.tractorId, dto.trailerId);
+      await this.checkDriver(m, dto.driverId);
+      this.checkPlanFields(dto, trailer, now, true);
+      const a = await this.assessments.assess({ ...dto, route, tractor, trailer });
+      const [{ n }] = await m.query(`SELECT nextval('move_reference_seq')::int AS n`);
+      const move = m.create(Move, {
+        reference: `AM-${now.getUTCFullYear()}-${String(n).padStart(5, '0')}`,
+        customer: dto.customer.trim(),
+        customerRef: dto.customerRef?.trim() || null,
+        commodity: dto.commodity.trim(),
+        stage: 'requested',
+        tractorId: tractor.id,
+        trailerId: trailer.id,
+        driverId: dto.driverId ?? null,
+        sliderSettingFt: dto.sliderSettingFt ?? null,
+        articles: JSON.parse(JSON.stringify(dto.articles)),
+        route,
+        jurisdictions: [...new Set(route.map((s) => s.jurisdiction))],
+        origin: dto.origin.trim(),
+        destination: dto.destination.trim(),
+        requestedDeparture: dto.requestedDeparture,
+        travelDays: dto.travelDays,
+        notes: dto.notes ?? null,
+        summary: summarize(a.result),
+        createdById: actor.id,
+      });
+      const saved = await m.save(move);
+      await this.audit.record(m, { moveId: saved.id, entity: 'move', entityId: saved.id, action: 'created', actorId: actor.id, after: auditView(saved) });
+      return saved.id;
+    });
+    return toMoveDto(await this.get(id));
+  }
+
+  async update(id: string, dto: UpdateMoveDto, actor: SessionUser, now: Date): Promise<MoveDto> {
+    await this.ds.transaction(async (m) => {
+      const before = await m.findOne(Move, { where: { id }, lock: { mode: 'pessimistic_write' } });
+      if (!before) throw new AppException(404, 'not_found', `No move ${id}`);
+      if (before.version !== dto.version) {
+        throw new AppException(409, 'conflict', `This move was changed by someone else (version ${before.version}, yours ${dto.version}); reload it`, { currentVersion: before.version });
+      }
+      if (before.stage === 'delivered' || before.stage === 'cancelled') throw new AppException(409, 'conflict', `A ${before.stage} move cannot be edited`);
+      const { version, ...changes } = dto;
+      void version;
+      const after = m.create(Move, { ...before });
+      if (changes.route) {
+        after.route = resolveRoute(changes.route);
+        after.jurisdictions = [...new Set(after.route.map((s) => s.jurisdiction))];
+      }
+      for (const [k, v] of Object.entries(changes)) {
+        if (v === undefined || k === 'route') continue;
+        (after as unknown as Record<string, unknown>)[k] = k === 'articles' ? JSON.parse(JSON.stringify(v)) : v;
+      }
+      const { tractor, trailer } = await this.equipment(m, after.tractorId, after.trailerId);
+      if (changes.driverId !== undefined) await this.checkDriver(m, changes.driverId);
+      this.checkPlanFields({ ...changes, sliderSettingFt: after.sliderSettingFt }, trailer, now, changes.requestedDeparture !== undefined && changes.requestedDeparture !== before.requestedDeparture);
+      const changedPlan = PLAN_FIELDS.filter((f) => JSON.stringify(before[f]) !== JSON.stringify(after[f]));
+      if (changedPlan.length) {
+        const a = await this.assessments.assess({ ...after, tractor, trailer });
+        after.summary = summarize(a.result);
+        after.planRevision = before.planRevision + 1;
+      }
+      const d = diff(auditView(before), auditView(after));
+      if (!Object.keys(d.after).length) return;
+      after.version = before.version + 1;
+      after.updatedAt = now;
+      const res = await m
+        .createQueryBuilder()
+        .update(Move)
+        .set({
+          customer: after.customer, customerRef: after.customerRef, commodity: after.commodity, tractorId: after.tractorId, trailerId: after.trailerId,
+          driverId: after.driverId, sliderSettingFt: after.sliderSettingFt, articles: after.articles, route: after.route, jurisdictions: after.jurisdictions,
+          origin: after.origin, destination: after.destination, requestedDeparture: after.requestedDeparture, travelDays: after.travelDays,
+          notes: after.notes, summary: after.summary, planRevision: after.planRevision, version: after.version,
+        })
+        .where('id = :id AND version = :v', { id, v: before.version })
+        .execute();
+      if (res.affected !== 1) throw new AppException(409, 'conflict', 'This move was changed by someone else; reload it');
+      await this.audit.record(m, { moveId: id, entity: 'move', entityId: id, action: 'updated', actorId: actor.id, before: d.before, after: d.after });
+      if (changedPlan.length) {
+        for (const ext of this.extensions.all()) await ext.onPlanChanged?.({ manager: m, before, after, changed: changedPlan, actor });
+      }
+    });
+    return toMoveDto(await this.get(id));
+  }
+
+  async list(q: ListMovesQuery, viewer: SessionUser): Promise<MovesPage> {
+    const qb = this.moves.createQueryBuilder('m').leftJoinAndSelect('m.driver', 'd');
+    if (q.stage) qb.andWhere('m.stage = :stage', { stage: q.stage });
+    if (q.jurisdiction) qb.andWhere(':j = ANY(m.jurisdictions)', { j: q.jurisdiction });
+    if (viewer.role === 'driver') qb.andWhere('m.driver_id = :me', { me: viewer.id });
+    if (q.search) {
+      qb.andWhere(`(m.reference || ' ' || m.customer || ' ' || m.commodity || ' ' || m.origin || ' ' || m.destination) ILIKE :s`, {
+        s: `%${q.search.replace(/[%_\\]/g, '\\$&')}%`,
+      });
+    }
+    if (q.sort === 'updated') qb.orderBy('m.updated_at', 'DESC');
+    else qb.orderBy('m.requested_departure', q.sort === '-departure' ? 'DESC' : 'ASC');
+    qb.addOrderBy('m.id', 'ASC');
+    const [rows, total] = await qb.skip((q.page - 1) * q.pageSize).take(q.pageSize).getManyAndCount();
+    return { items: rows.map(toSummaryDto), total, page: q.page, pageSize: q.pageSize };
+  }
+
+  async stageCounts(viewer: SessionUser): Promise<StageCounts> {
+    const rows: { stage: MoveStage; n: number }[] = await this.ds.query(
+      `SELECT stage, count(*)::int AS n FROM moves ${viewer.role === 'driver' ? 'WHERE driver_id = $1' : ''} GROUP BY stage`,
+      viewer.role === 'driver' ? [viewer.id] : [],
+    );
+    const counts = Object.fromEntries(MOVE_STAGES.map((s) => [s, 0])) as StageCounts;
+    for (const r of rows) counts[r.stage] = r.n;
+    return counts;
+  }
+
+  async assessment(id: string, viewer: SessionUser, now: Date): Promise<AssessmentDto> {
+    const move = await this.get(id, viewer);
+    return this.assessmentOf(move, now);
+  }
+
+  async assessmentOf(move: Move, now: Date, manager?: EntityManager): Promise<AssessmentDto> {
+    const tractor = move.tractor ?? (await (manager ?? this.ds.manager).findOneByOrFail(Tractor, { id: move.tractorId }));
+    const trailer = move.trailer ?? (await (manager ?? this.ds.manager).findOneByOrFail(Trailer, { id: move.trailerId }));
+    const a = await this.assessments.assess({ ...move, tractor, trailer });
+    return this.assessments.toDto(move.id, move.version, a, now);
+  }
+
+  async history(id: string, viewer: SessionUser): Promise<HistoryEntryDto[]> {
+    await this.get(id, viewer);
+    return this.audit.forMove(id);
+  }
+}
+
+export function toSummaryDto(m: Move): MoveSummaryDto {
+  const s = m.summary ?? ({} as Move['summary']);
+  return {
+    id: m.id,
+    reference: m.reference,
+    customer: m.customer,
+    commodity: m.commodity,
+    stage: m.stage,
+    origin: m.origin,
+    destination: m.destination,
+    requestedDeparture: m.requestedDeparture,
+    jurisdictions: m.jurisdictions,
+    driver: m.driver ? { id: m.driver.id, name: m.driver.name } : null,
+    flags: {
+      permitsNeeded: s.permitsNeeded?.length ?? 0,
+      escorts: s.escorts ?? 0,
+      superload: !!s.superload,
+      problems: s.problems?.length ?? 0,
+      overweight: !!s.overweight,
+    },
+    updatedAt: m.updatedAt.toISOString(),
+  };
+}

@@ -1,0 +1,128 @@
+import { Injectable, Logger, OnApplicationBootstrap } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { DataSource, In, Repository } from 'typeorm';
+import {
+  assessJurisdiction, FEDERAL_DEFAULT_RULE, JURISDICTIONS, jurisdictionByCode, SAMPLE_RULES,
+  type JurisdictionRule, type JurisdictionSummaryDto, type RuleVersionDto, type SessionUser,
+} from '@amberline/common';
+import { AuditService } from '../audit/audit.service';
+import { AppException, fieldError } from '../core/app-exception';
+import { Jurisdiction } from './entities/jurisdiction.entity';
+import { RuleVersion } from './entities/rule-version.entity';
+
+/** The starting record of a jurisdiction: the sample record where we have one, else the federal defaults. */
+export function initialRecord(code: string, name: string): JurisdictionRule {
+  const sample = SAMPLE_RULES[code];
+  if (sample) return sample;
+  return { ...FEDERAL_DEFAULT_RULE, code, name, sample: true };
+}
+
+const toVersionDto = (v: RuleVersion): RuleVersionDto => ({
+  code: v.code, version: v.version, record: v.record, note: v.note, createdBy: v.createdBy?.name ?? null, createdAt: v.createdAt.toISOString(),
+});
+
+/** Throws a 400 naming the part of a rule record that is missing or wrong. */
+export function checkRuleRecord(code: string, r: JurisdictionRule): void {
+  if (r.code !== code) throw fieldError('record.code', `must be ${code}`);
+  if (!/^\d{4}-\d{2}-\d{2}$/.test(String(r.asOf))) throw fieldError('record.asOf', 'must be a YYYY-MM-DD date');
+  for (const key of ['legal', 'permit', 'escorts', 'signs', 'flags', 'lamps', 'travel', 'fee', 'superload'] as const) {
+    if (r[key] === undefined || r[key] === null) throw fieldError(`record.${key}`, 'is required');
+  }
+  for (const k of ['widthIn', 'heightIn', 'lengthIn', 'singleAxleLb', 'tandemLb', 'grossLb'] as const) {
+    const v = r.legal[k];
+    if (typeof v !== 'number' || !Number.isFinite(v) || v <= 0) throw fieldError(`record.legal.${k}`, 'must be a positive number');
+  }
+  if (typeof r.permit.validityDays !== 'number' || r.permit.validityDays < 1 || r.permit.validityDays > 366) {
+    throw fieldError('record.permit.validityDays', 'must be 1 to 366 days');
+  }
+  // a dry run through the engine on a typical wide load catches anything else the engine cannot read
+  try {
+    assessJurisdiction(r, {
+      dimensions: { widthIn: 168, heightIn: 170, lengthIn: 900, frontOverhangIn: 0, rearOverhangIn: 60, sideProjectionIn: 33, sideProjectionLeftIn: 33, sideProjectionRightIn: 33, rearProjectionWidthIn: 168, grossLb: 95000 },
+      axles: [{ positionFt: 0, weightLb: 12000 }, { positionFt: 20, weightLb: 17000 }, { positionFt: 24.3, weightLb: 17000 }, { positionFt: 60, weightLb: 24500 }, { positionFt: 64.3, weightLb: 24500 }],
+      miles: 100,
+      roadTypes: ['two-lane', 'interstate'],
+    } as Parameters<typeof assessJurisdiction>[1]);
+  } catch (e) {
+    throw fieldError('record', `the engine cannot use this record: ${(e as Error).message}`);
+  }
+}
+
+@Injectable()
+export class RulebookService implements OnApplicationBootstrap {
+  private readonly logger = new Logger('Rulebook');
+  constructor(
+    private readonly ds: DataSource,
+    private readonly audit: AuditService,
+    @InjectRepository(Jurisdiction) private readonly jurisdictions: Repository<Jurisdiction>,
+    @InjectRepository(RuleVersion) private readonly versions: Repository<RuleVersion>,
+  ) {}
+
+  /** Every jurisdiction gets a first version on first start; safe when several servers start at once. */
+  async onApplicationBootstrap(): Promise<void> {
+    await this.ds.transaction(async (m) => {
+      await m.query(`SELECT pg_advisory_xact_lock(hashtext('amberline.rulebook.bootstrap'))`);
+      const have = new Set((await m.find(Jurisdiction)).map((j) => j.code));
+      const missing = JURISDICTIONS.filter((j) => !have.has(j.code));
+      for (const j of missing) {
+        const record = initialRecord(j.code, j.name);
+        await m.insert(Jurisdiction, { code: j.code, name: j.name, currentVersion: 1 });
+        await m.insert(RuleVersion, { code: j.code, version: 1, record, sample: record.sample, asOf: record.asOf, note: 'initial record', createdById: null });
+      }
+      if (missing.length) this.logger.log(`rulebook: added ${missing.length} jurisdictions`);
+    });
+  }
+
+  async list(): Promise<JurisdictionSummaryDto[]> {
+    const rows: { code: string; name: string; version: number; sample: boolean; as_of: string; created_at: Date }[] = await this.ds.query(
+      `SELECT j.code, j.name, v.version, v.sample, to_char(v.as_of, 'YYYY-MM-DD') AS as_of, v.created_at
+         FROM jurisdictions j JOIN rule_versions v ON v.code = j.code AND v.version = j.current_version ORDER BY j.name`,
+    );
+    return rows.map((r) => ({ code: r.code, name: r.name, version: r.version, sample: r.sample, asOf: r.as_of, updatedAt: new Date(r.created_at).toISOString() }));
+  }
+
+  async current(code: string): Promise<RuleVersionDto> {
+    const j = await this.jurisdictions.findOneBy({ code: code.toUpperCase() });
+    if (!j) throw new AppException(404, 'not_found', `No jurisdiction ${code}`);
+    const v = await this.versions.findOne({ where: { code: j.code, version: j.currentVersion }, relations: { createdBy: true } });
+    return toVersionDto(v!);
+  }
+
+  async history(code: string): Promise<RuleVersionDto[]> {
+    const rows = await this.versions.find({ where: { code: code.toUpperCase() }, relations: { createdBy: true }, order: { version: 'DESC' } });
+    if (!rows.length) throw new AppException(404, 'not_found', `No jurisdiction ${code}`);
+    return rows.map(toVersionDto);
+  }
+
+  /** Current records for the given codes, with their versions. Unknown codes are left out. */
+  async currentRules(codes: string[]): Promise<Map<string, { record: JurisdictionRule; version: number }>> {
+    if (!codes.length) return new Map();
+    const rows: { code: string; version: number; record: JurisdictionRule }[] = await this.ds.query(
+      `SELECT v.code, v.version, v.record FROM jurisdictions j JOIN rule_versions v ON v.code = j.code AND v.version = j.current_version WHERE j.code = ANY($1)`,
+      [codes],
+    );
+    return new Map(rows.map((r) => [r.code, { record: r.record, version: r.version }]));
+  }
+
+  async update(codeRaw: string, record: JurisdictionRule, note: string, actor: SessionUser): Promise<RuleVersionDto> {
+    const code = codeRaw.toUpperCase();
+    if (!jurisdictionByCode(code)) throw new AppException(404, 'not_found', `No jurisdiction ${code}`);
+    checkRuleRecord(code, record);
+    const id = await this.ds.transaction(async (m) => {
+      const j = await m.findOne(Jurisdiction, { where: { code }, lock: { mode: 'pessimistic_write' } });
+      if (!j) throw new AppException(404, 'not_found', `No jurisdiction ${code}`);
+      const version = j.currentVersion + 1;
+      const inserted = await m.insert(RuleVersion, { code, version, record, sample: !!record.sample, asOf: record.asOf, note, createdById: actor.id });
+      await m.update(Jurisdiction, { code }, { currentVersion: version });
+      await this.audit.record(m, { entity: 'rule', entityId: code, action: 'new_version', actorId: actor.id, before: { version: j.currentVersion }, after: { version }, reason: note });
+      return inserted.identifiers[0].id as string;
+    });
+    const v = await this.versions.findOne({ where: { id }, relations: { createdBy: true } });
+    return toVersionDto(v!);
+  }
+
+  async exists(codes: string[]): Promise<Set<string>> {
+    const rows = await this.jurisdictions.findBy({ code: In(codes) });
+    return new Set(rows.map((r) => r.code));
+  }
+}

@@ -1,0 +1,123 @@
+import type { TravelRules } from './jurisdiction-rule';
+import { SAMPLE_RULE_TX, SAMPLE_RULE_VA, SAMPLE_RULE_WA } from './rulebook-samples';
+import { travelWindows } from './travel-windows';
+
+const DC = { lat: 38.9, lon: -77.0, timeZone: 'America/New_York' };
+const ATL = { lat: 33.8, lon: -84.4, timeZone: 'America/New_York' };
+const minutes = (hhmm: string) => Number(hhmm.slice(0, 2)) * 60 + Number(hhmm.slice(3));
+const open: TravelRules = {
+  daylight: null,
+  weekends: { allowed: true, source: { citation: 'test', asOf: '2026-12-01' } },
+  holidays: { names: [], from: 'day-only', observance: 'both', source: { citation: 'test', asOf: '2026-12-01' } },
+  curfews: [],
+};
+
+describe('travelWindows', () => {
+  it('Tex. Transp. Code 541.401 + USNO: 30 min before sunrise (07:15) to 30 min after sunset (19:56), Atlanta 2009-09-06, ±3 min', () => {
+    const r = travelWindows({ date: '2009-09-06', ...ATL, rule: SAMPLE_RULE_TX });
+    expect(r.intervals).toHaveLength(1);
+    expect(Math.abs(minutes(r.intervals[0].startLocal) - minutes('06:45'))).toBeLessThanOrEqual(3);
+    expect(Math.abs(minutes(r.intervals[0].endLocal) - minutes('20:26'))).toBeLessThanOrEqual(3);
+    expect(Date.parse(r.intervals[0].start)).toBe(Date.parse(r.sunrise!) - 30 * 60_000);
+    expect(r.restrictions[0].source).toMatch(/541.401/);
+  });
+
+  it('24VAC20-82-110 + USNO: sunrise (06:12) to sunset (18:21), Washington DC 2002-03-20, ±3 min', () => {
+    const r = travelWindows({ date: '2002-03-20', ...DC, rule: SAMPLE_RULE_VA });
+    expect(Math.abs(minutes(r.intervals[0].startLocal) - minutes('06:12'))).toBeLessThanOrEqual(3);
+    expect(Math.abs(minutes(r.intervals[0].endLocal) - minutes('18:21'))).toBeLessThanOrEqual(3);
+  });
+
+  // 24VAC20-82-110: no travel from noon the preceding weekday through the holiday (Monday holiday: from noon Friday).
+  it.each([
+    ['2024-05-24', 'Friday before Memorial Day: travel ends at noon', true, '12:00'],
+    ['2024-05-25', 'Saturday: blocked', false, null],
+    ['2024-05-26', 'Sunday: blocked', false, null],
+    ['2024-05-27', 'Memorial Day: blocked', false, null],
+    ['2024-07-03', 'Wednesday before Independence Day (Thursday): ends at noon', true, '12:00'],
+    ['2024-07-04', 'Independence Day: blocked', false, null],
+    ['2024-11-27', 'Wednesday before Thanksgiving: ends at noon', true, '12:00'],
+    ['2024-11-29', 'Friday after Thanksgiving: open in Virginia', true, null],
+    ['2022-12-23', 'Christmas on Sunday 2022: from noon Friday', true, '12:00'],
+    ['2022-12-26', 'Christmas observed Monday 2022: blocked', false, null],
+    ['2024-12-31', "New Year's Eve 2024 (Tuesday): ends at noon", true, '12:00'],
+  ])('24VAC20-82-110: %s — %s', (date, _what, allowed, endsAt) => {
+    const r = travelWindows({ date, ...DC, rule: SAMPLE_RULE_VA });
+    expect(r.allowed).toBe(allowed);
+    if (endsAt) expect(r.intervals[r.intervals.length - 1].endLocal).toBe(endsAt);
+    if (!allowed) expect(r.restrictions.some((x) => x.code === 'holiday' && x.source.includes('24VAC20-82-110'))).toBe(true);
+  });
+
+  // WAC 468-38-175: the six holidays plus the day after Thanksgiving, from noon the day before.
+  it.each([
+    ['2024-11-27', true, '12:00'],
+    ['2024-11-28', false, null],
+    ['2024-11-29', false, null],
+    ['2024-11-30', true, null],
+    ['2024-08-30', true, null], // Friday before Labor Day: open (restriction starts noon Sunday)
+    ['2024-09-01', true, '12:00'],
+  ])('WAC 468-38-175: %s allowed %p (ends %p)', (date, allowed, endsAt) => {
+    const r = travelWindows({ date, lat: 47.6, lon: -122.3, timeZone: 'America/Los_Angeles', rule: SAMPLE_RULE_WA });
+    expect(r.allowed).toBe(allowed);
+    if (endsAt) expect(r.intervals[r.intervals.length - 1].endLocal).toBe(endsAt);
+    expect(r.reasons.some((x) => x.code === 'visibility' && x.value === 500)).toBe(true);
+  });
+
+  it('24VAC20-82-110: inside city limits no travel 7–9 a.m. and 4–6 p.m.', () => {
+    const r = travelWindows({ date: '2024-06-05', ...DC, rule: SAMPLE_RULE_VA, urban: true });
+    expect(r.intervals.map((i) => [i.startLocal, i.endLocal])).toEqual([
+      [r.intervals[0].startLocal, '07:00'],
+      ['09:00', '16:00'],
+      ['18:00', r.intervals[2].endLocal],
+    ]);
+  });
+
+  it.each([
+    [{ overweightOnly: true }, 1, '24VAC20-82-110: overweight-only is exempt from the curfew'],
+    [{ overlengthOnly: true, lengthIn: 85 * 12 }, 1, '24VAC20-82-110: overlength-only up to 85 ft is exempt'],
+    [{ overlengthOnly: true, lengthIn: 85 * 12 + 1 }, 3, '24VAC20-82-110: overlength over 85 ft is not exempt'],
+  ])('%j → %i interval(s) (%s)', (load, n, _source) => {
+    const r = travelWindows({ date: '2024-06-05', ...DC, rule: SAMPLE_RULE_VA, urban: true, load });
+    expect(r.intervals).toHaveLength(n);
+  });
+
+  it('weekend rule: no travel on Saturday when the rule forbids weekends (rulebook data)', () => {
+    const rule: TravelRules = { ...open, weekends: { allowed: false, source: { citation: 'sample data', asOf: '2026-12-01', sample: true } } };
+    expect(travelWindows({ date: '2024-06-08', ...DC, rule }).allowed).toBe(false);
+    expect(travelWindows({ date: '2024-06-07', ...DC, rule }).allowed).toBe(true);
+  });
+
+  it('permit validity clips the days', () => {
+    const permitValidity = { from: '2024-06-03', to: '2024-06-07' };
+    expect(travelWindows({ date: '2024-06-07', ...DC, rule: open, permitValidity }).allowed).toBe(true);
+    expect(travelWindows({ date: '2024-06-08', ...DC, rule: open, permitValidity }).allowed).toBe(false);
+  });
+
+  // 15 U.S.C. 260a: DST from the second Sunday of March to the first Sunday of November, 2 a.m.
+  it.each([
+    ['2024-03-10', 23],
+    ['2024-11-03', 25],
+    ['2024-06-05', 24],
+  ])('15 U.S.C. 260a: %s in New York is %i hours long (local midnight to midnight)', (date, hours) => {
+    const r = travelWindows({ date, ...DC, rule: open });
+    expect(r.intervals).toHaveLength(1);
+    expect((Date.parse(r.intervals[0].end) - Date.parse(r.intervals[0].start)) / 3_600_000).toBe(hours);
+    expect(r.intervals[0].startLocal).toBe('00:00');
+    expect(r.intervals[0].endLocal).toBe('24:00');
+  });
+
+  it('15 U.S.C. 260a: a 7:00 curfew on the spring-forward day is at 7:00 EDT (11:00 UTC)', () => {
+    const rule: TravelRules = { ...open, curfews: [{ start: '07:00', end: '09:00', appliesIn: 'everywhere', source: { citation: 'test', asOf: '2026-12-01' } }] };
+    const r = travelWindows({ date: '2024-03-10', ...DC, rule });
+    expect(r.intervals[0].end).toBe('2024-03-10T11:00:00.000Z');
+  });
+
+  it.each([
+    [{ date: '2024-13-01' }, /date/],
+    [{ timeZone: 'Mars/Olympus' }, /timeZone must be an IANA time zone/],
+    [{ lat: -91 }, /lat must be at least -90/],
+  ])('bad input %j → RangeError', (patch, msg) => {
+    expect(() => travelWindows({ date: '2024-06-05', ...DC, rule: open, ...patch })).toThrow(RangeError);
+    expect(() => travelWindows({ date: '2024-06-05', ...DC, rule: open, ...patch })).toThrow(msg);
+  });
+});
