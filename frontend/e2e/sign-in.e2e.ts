@@ -9,10 +9,10 @@ describe('sign-in in the browser', () => {
   afterAll(() => browser?.close());
 
   it.each([
-    ['admin@amberline.example', 'Admin', ['Overview', 'Users']],
-    ['dispatcher@amberline.example', 'Dispatcher', ['Overview']],
-    ['clerk@amberline.example', 'Permit clerk', ['Overview']],
-    ['driver@amberline.example', 'Driver', ['Overview']],
+    ['admin@amberline.example', 'Admin', ['Overview', 'Moves', 'Permit desk', 'Payments', 'Escort vendors', 'Fleet', 'Rulebook', 'Users']],
+    ['dispatcher@amberline.example', 'Dispatcher', ['Overview', 'Moves', 'Permit desk', 'Escort vendors', 'Fleet', 'Rulebook']],
+    ['clerk@amberline.example', 'Permit clerk', ['Overview', 'Moves', 'Permit desk', 'Payments', 'Fleet', 'Rulebook']],
+    ['driver@amberline.example', 'Driver', ['Run sheets']],
   ])('%s signs in and sees the navigation of a %s', async (email, roleLabel, nav) => {
     const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
     const outside: string[] = [];

@@ -1,0 +1,6 @@
+import { Result } from 'antd';
+
+// Placeholder until this screen lands; replaced by its own work item.
+export function MovePage() {
+  return <Result status="info" title="Not built yet" />;
+}
