@@ -18,6 +18,13 @@ export class UsersController {
     return this.users.list(q);
   }
 
+  /** Active drivers, for assigning a driver to a move. */
+  @Get('drivers')
+  @Roles('admin', 'dispatcher')
+  drivers(): Promise<{ id: string; name: string; email: string }[]> {
+    return this.users.activeDrivers();
+  }
+
   @Post()
   @Roles('admin')
   create(@Body() dto: CreateUserDto): Promise<UserDto> {

@@ -48,6 +48,11 @@ export class UsersService {
     return this.users.createQueryBuilder('u').where('lower(u.email) = lower(:email)', { email }).getOne();
   }
 
+  async activeDrivers(): Promise<{ id: string; name: string; email: string }[]> {
+    const rows = await this.users.find({ where: { role: 'driver', active: true }, order: { name: 'ASC' }, take: 500 });
+    return rows.map((u) => ({ id: u.id, name: u.name, email: u.email }));
+  }
+
   findActiveById(id: string): Promise<User | null> {
     return this.users.findOneBy({ id, active: true });
   }
