@@ -2,7 +2,7 @@ import { Injectable, Logger, OnApplicationBootstrap } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { DataSource, In, Repository } from 'typeorm';
 import {
-  assessJurisdiction, FEDERAL_DEFAULT_RULE, JURISDICTIONS, jurisdictionByCode, SAMPLE_RULES,
+  assessJurisdiction, FEDERAL_DEFAULT_RULE, validateJurisdictionRule, JURISDICTIONS, jurisdictionByCode, SAMPLE_RULES,
   type JurisdictionRule, type JurisdictionSummaryDto, type RuleVersionDto, type SessionUser,
 } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
@@ -23,18 +23,16 @@ const toVersionDto = (v: RuleVersion): RuleVersionDto => ({
 
 /** Throws a 400 naming the part of a rule record that is missing or wrong. */
 export function checkRuleRecord(code: string, r: JurisdictionRule): void {
+  try {
+    validateJurisdictionRule(r);
+  } catch (e) {
+    if (e instanceof RangeError) {
+      const field = e.message.split(/[\s:]/)[0].replace(/^rule/, 'record');
+      throw fieldError(field || 'record', e.message.replace(/^rule/, 'record'));
+    }
+    throw e;
+  }
   if (r.code !== code) throw fieldError('record.code', `must be ${code}`);
-  if (!/^\d{4}-\d{2}-\d{2}$/.test(String(r.asOf))) throw fieldError('record.asOf', 'must be a YYYY-MM-DD date');
-  for (const key of ['legal', 'permit', 'escorts', 'signs', 'flags', 'lamps', 'travel', 'fee', 'superload'] as const) {
-    if (r[key] === undefined || r[key] === null) throw fieldError(`record.${key}`, 'is required');
-  }
-  for (const k of ['widthIn', 'heightIn', 'lengthIn', 'singleAxleLb', 'tandemLb', 'grossLb'] as const) {
-    const v = r.legal[k];
-    if (typeof v !== 'number' || !Number.isFinite(v) || v <= 0) throw fieldError(`record.legal.${k}`, 'must be a positive number');
-  }
-  if (typeof r.permit.validityDays !== 'number' || r.permit.validityDays < 1 || r.permit.validityDays > 366) {
-    throw fieldError('record.permit.validityDays', 'must be 1 to 366 days');
-  }
   // a dry run through the engine on a typical wide load catches anything else the engine cannot read
   try {
     assessJurisdiction(r, {
