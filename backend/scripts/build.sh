@@ -11,7 +11,7 @@ stale() { # stale <output-file> <dir>...: true when the output is missing or old
 if stale common/dist/index.js common/src common/tsconfig.json common/tsconfig.build.json; then
   echo "build: common"; npm run -s build -w common
 fi
-if stale seed/dist/run.js seed/src common/dist; then
+if stale seed/dist/index.js seed/src common/dist; then
   echo "build: seed"; npm run -s build -w seed
 fi
 if stale backend/dist/main.js backend/src common/dist seed/dist; then

@@ -21,7 +21,7 @@ export JWT_SECRET="$(cat .data/jwt-secret)" PORT=3000 HOST=127.0.0.1 NODE_ENV=de
 source backend/scripts/fakes.sh
 start_fakes
 node backend/dist/database/migrate.js
-node seed/dist/run.js demo
+node backend/dist/demo/load-demo.js
 npx tsc -p common/tsconfig.build.json --watch --preserveWatchOutput >/dev/null & PIDS+=($!)
 npx tsc -p backend/tsconfig.build.json --watch --preserveWatchOutput & PIDS+=($!)
 node --watch backend/dist/main.js & PIDS+=($!)

@@ -25,7 +25,7 @@ source backend/scripts/fakes.sh
 start_fakes
 
 node backend/dist/database/migrate.js
-node seed/dist/run.js demo
+node backend/dist/demo/load-demo.js
 node backend/dist/main.js &
 PIDS+=($!)
 echo "amberline: http://127.0.0.1:$PORT (API docs at /api/docs; Ctrl-C stops)"

@@ -164,6 +164,18 @@ describe('/api/moves', () => {
       expect(hist.at(-1)).toMatchObject({ action: 'stage', before: { stage: 'requested' }, after: { stage: 'cancelled' }, reason: 'customer postponed' });
     });
 
+    it('refuses to run a move whose securement falls short or that has no driver, listing both', async () => {
+      const short = wideExcavator({ tiedowns: [{ kind: 'chain', chainSize: '3/8', chainGrade: 70, anchorKind: 'stake_pocket', path: 'direct' }] });
+      const m = (await create({ articles: [short] })).body;
+      // earlier stages are guarded by the permit and escort checks; this test starts at escorts_booked
+      await t.ds.query(`UPDATE moves SET stage = 'escorts_booked' WHERE id = $1`, [m.id]);
+      const res = await t.http().post(`/api/moves/${m.id}/stage`).set(as('dispatcher')).send({ to: 'running' });
+      expect(res.status).toBe(409);
+      const codes = res.body.details.unmet.map((u: { code: string }) => u.code);
+      expect(codes).toEqual(expect.arrayContaining(['driver_missing', 'securement_short']));
+      expect(res.body.message).toMatch(/securement of A1 falls short/);
+    });
+
     it('two simultaneous transitions: exactly one wins, the other gets 409', async () => {
       const m = (await create()).body;
       const [a, b] = await Promise.all([

@@ -1,4 +1,4 @@
 export * from './db';
 export * from './builders/user';
-export * from './scenarios/demo';
 export * from './builders/fleet';
+export * from './scenarios/demo';
