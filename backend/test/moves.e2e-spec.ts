@@ -52,8 +52,9 @@ describe('/api/moves', () => {
   });
 
   it('lists moves with paging, stage filter and search; counts per stage', async () => {
-    const m = (await create({ customer: 'Searchable Bluffs Gravel' })).body;
-    const res = await t.http().get('/api/moves').query({ search: 'Searchable Bluffs', stage: 'requested' }).set(as('permit_clerk'));
+    const name = `Searchable Bluffs Gravel ${Date.now().toString(36)}${process.pid}`;
+    const m = (await create({ customer: name })).body;
+    const res = await t.http().get('/api/moves').query({ search: name, stage: 'requested' }).set(as('permit_clerk'));
     expect(res.status).toBe(200);
     expect(res.body.items.map((x: { id: string }) => x.id)).toEqual([m.id]);
     expect(res.body.items[0].flags.permitsNeeded).toBe(1);
