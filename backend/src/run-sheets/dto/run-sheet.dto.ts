@@ -1,0 +1,23 @@
+import { Type } from 'class-transformer';
+import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsNumber, IsString, Length, Max, Min, ValidateNested } from 'class-validator';
+import type { AcknowledgeRequest, DepartureChecksRequest, GaugeReading } from '@amberline/common';
+
+export class GaugeReadingDto implements GaugeReading {
+  @IsIn(['trailer']) group: 'trailer';
+  @IsNumber() @Min(0) @Max(150, { message: 'psi must not exceed 150' }) psi: number;
+}
+
+export class DepartureChecksDtoIn implements DepartureChecksRequest {
+  @IsNumber() @Min(12, { message: 'measuredHeightIn must be at least 12 in' }) @Max(300, { message: 'measuredHeightIn must not exceed 300 in' }) measuredHeightIn: number;
+  @IsNumber() @Min(12, { message: 'measuredWidthIn must be at least 12 in' }) @Max(360, { message: 'measuredWidthIn must not exceed 360 in' }) measuredWidthIn: number;
+  @IsNumber() @Min(120, { message: 'measuredLengthIn must be at least 120 in' }) @Max(2400, { message: 'measuredLengthIn must not exceed 2,400 in' }) measuredLengthIn: number;
+  @IsBoolean() sliderPinsLocked: boolean;
+  @IsBoolean() tiresInflated: boolean;
+  @IsBoolean() markingsInPlace: boolean;
+  @IsBoolean() permitsOnBoard: boolean;
+  @IsArray() @ArrayMaxSize(4) @ValidateNested({ each: true }) @Type(() => GaugeReadingDto) gaugeReadings: GaugeReadingDto[];
+}
+
+export class AcknowledgeDto implements AcknowledgeRequest {
+  @IsString() @Length(64, 64, { message: 'fingerprint must be the 64-character fingerprint shown on the run sheet' }) fingerprint: string;
+}

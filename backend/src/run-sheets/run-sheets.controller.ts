@@ -1,0 +1,51 @@
+import { Body, Controller, Get, Param, ParseUUIDPipe, Post, Res } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import type { Response } from 'express';
+import type { DepartureChecksDto, RunSheetDto, SessionUser } from '@amberline/common';
+import { CurrentUser } from '../core/decorators/current-user.decorator';
+import { Roles } from '../core/decorators/roles.decorator';
+import { AcknowledgeDto, DepartureChecksDtoIn } from './dto/run-sheet.dto';
+import { renderRunSheetPdf } from './run-sheet-pdf';
+import { RunSheetsService } from './run-sheets.service';
+
+@ApiTags('run sheets')
+@ApiBearerAuth()
+@Controller('moves/:id')
+export class RunSheetsController {
+  constructor(private readonly sheets: RunSheetsService) {}
+
+  @Get('run-sheet')
+  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  get(@Param('id', new ParseUUIDPipe()) id: string, @CurrentUser() user: SessionUser): Promise<RunSheetDto> {
+    return this.sheets.build(id, user, new Date());
+  }
+
+  @Get('run-sheet.pdf')
+  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  async pdf(@Param('id', new ParseUUIDPipe()) id: string, @CurrentUser() user: SessionUser, @Res() res: Response): Promise<void> {
+    const sheet = await this.sheets.build(id, user, new Date());
+    const doc = renderRunSheetPdf(sheet);
+    res.setHeader('content-type', 'application/pdf');
+    res.setHeader('content-disposition', `inline; filename="run-sheet-${sheet.move.reference}.pdf"`);
+    doc.pipe(res);
+    doc.end();
+  }
+
+  @Get('departure-checks')
+  @Roles('admin', 'dispatcher', 'driver')
+  checks(@Param('id', new ParseUUIDPipe()) id: string, @CurrentUser() user: SessionUser): Promise<DepartureChecksDto[]> {
+    return this.sheets.checksHistory(id, user);
+  }
+
+  @Post('departure-checks')
+  @Roles('driver')
+  submit(@Param('id', new ParseUUIDPipe()) id: string, @Body() dto: DepartureChecksDtoIn, @CurrentUser() user: SessionUser): Promise<DepartureChecksDto> {
+    return this.sheets.submitChecks(id, dto, user, new Date());
+  }
+
+  @Post('run-sheet/acknowledgement')
+  @Roles('driver')
+  acknowledge(@Param('id', new ParseUUIDPipe()) id: string, @Body() dto: AcknowledgeDto, @CurrentUser() user: SessionUser): Promise<RunSheetDto> {
+    return this.sheets.acknowledge(id, dto, user, new Date());
+  }
+}

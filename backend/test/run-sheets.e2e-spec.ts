@@ -1,0 +1,142 @@
+import { execFileSync } from 'node:child_process';
+import type { Role } from '@amberline/common';
+import { seedTractor, seedTrailer } from '@amberline/seed';
+import { texasMove } from './fixtures/moves';
+import { createTestApp, type TestApp } from './utils/create-test-app';
+
+describe('run sheets and departure checks', () => {
+  let t: TestApp;
+  const tokens = {} as Record<Role, string>;
+  let driverId: string;
+  let otherDriver: string;
+  let tractorId: string;
+  let trailerId: string;
+  beforeAll(async () => {
+    t = await createTestApp();
+    for (const role of ['admin', 'dispatcher', 'permit_clerk', 'driver'] as Role[]) {
+      const u = await t.signedIn({ role });
+      tokens[role] = u.token;
+      if (role === 'driver') driverId = u.id;
+    }
+    otherDriver = (await t.signedIn({ role: 'driver' })).token;
+    tractorId = (await seedTractor(t.ds)).id;
+    trailerId = (await seedTrailer(t.ds)).id;
+  });
+  afterAll(() => t.close());
+  const as = (role: Role) => ({ authorization: `Bearer ${tokens[role]}` });
+
+  /** A move assigned to the test driver, at escorts_booked (the permit and escort guards are tested in their own files). */
+  async function readyMove() {
+    const m = (await t.http().post('/api/moves').set(as('dispatcher')).send(texasMove(tractorId, trailerId, { driverId }))).body;
+    await t.ds.query(`UPDATE moves SET stage = 'escorts_booked' WHERE id = $1`, [m.id]);
+    const sheet = (await t.http().get(`/api/moves/${m.id}/run-sheet`).set(as('driver'))).body;
+    return { m, sheet };
+  }
+  const goodChecks = (sheet: { checkAgainst: { heightIn: number; widthIn: number; lengthIn: number } }) => ({
+    measuredHeightIn: sheet.checkAgainst.heightIn,
+    measuredWidthIn: sheet.checkAgainst.widthIn,
+    measuredLengthIn: sheet.checkAgainst.lengthIn - 2,
+    sliderPinsLocked: true,
+    tiresInflated: true,
+    markingsInPlace: true,
+    permitsOnBoard: true,
+    gaugeReadings: [{ group: 'trailer', psi: 60 }],
+  });
+
+  it('shows the run sheet to the assigned driver and the office, 403 to another driver', async () => {
+    const { m, sheet } = await readyMove();
+    expect(sheet.move.reference).toBe(m.reference);
+    expect(sheet.fingerprint).toMatch(/^[0-9a-f]{64}$/);
+    expect(sheet.travel[0].jurisdiction).toBe('TX');
+    expect(sheet.cautions.join(' ')).toMatch(/certified scale/);
+    expect(sheet.markings.flags.length).toBeGreaterThan(0); // 15 ft wide on a 102 in deck: 39 in each side, more than 4 in (49 CFR 393.87)
+    expect((await t.http().get(`/api/moves/${m.id}/run-sheet`).set({ authorization: `Bearer ${otherDriver}` })).status).toBe(403);
+    expect((await t.http().get(`/api/moves/${m.id}/run-sheet`).set(as('permit_clerk'))).status).toBe(200);
+    expect((await t.http().get(`/api/moves/${m.id}/run-sheet`).set(as('dispatcher'))).status).toBe(200);
+  });
+
+  it('role matrix for the driver-only writes', async () => {
+    const { m, sheet } = await readyMove();
+    for (const role of ['admin', 'dispatcher', 'permit_clerk'] as Role[]) {
+      expect((await t.http().post(`/api/moves/${m.id}/departure-checks`).set(as(role)).send(goodChecks(sheet))).status).toBe(403);
+      expect((await t.http().post(`/api/moves/${m.id}/run-sheet/acknowledgement`).set(as(role)).send({ fingerprint: sheet.fingerprint })).status).toBe(403);
+    }
+    expect((await t.http().post(`/api/moves/${m.id}/departure-checks`).set({ authorization: `Bearer ${otherDriver}` }).send(goodChecks(sheet))).status).toBe(403);
+  });
+
+  it('a measured height over the plan beyond the tolerance blocks departure and tells the dispatcher', async () => {
+    const { m, sheet } = await readyMove();
+    const res = await t.http().post(`/api/moves/${m.id}/departure-checks`).set(as('driver')).send({ ...goodChecks(sheet), measuredHeightIn: sheet.checkAgainst.heightIn + 2 });
+    expect(res.status).toBe(201);
+    expect(res.body.outcome).toBe('blocked');
+    expect(res.body.findings[0]).toMatchObject({ code: 'height_over', blocking: true });
+    const ack = await t.http().post(`/api/moves/${m.id}/run-sheet/acknowledgement`).set(as('driver')).send({ fingerprint: sheet.fingerprint });
+    expect(ack.status).toBe(409);
+    const hist = (await t.http().get(`/api/moves/${m.id}/history`).set(as('dispatcher'))).body;
+    expect(hist.some((h: { action: string }) => h.action === 'departure_blocked')).toBe(true);
+    const run = await t.http().post(`/api/moves/${m.id}/stage`).set(as('dispatcher')).send({ to: 'running' });
+    expect(run.status).toBe(409);
+    expect(run.body.details.unmet.map((u: { code: string }) => u.code)).toContain('run_sheet_not_acknowledged');
+  });
+
+  it('passing checks, then the acknowledgement, lets the dispatcher start the move; the gauge gives an estimate', async () => {
+    const { m, sheet } = await readyMove();
+    const checks = await t.http().post(`/api/moves/${m.id}/departure-checks`).set(as('driver')).send(goodChecks(sheet));
+    expect(checks.body.outcome).toBe('passed');
+    // calibration 12 psi → 9,800 lb and 62 psi → 33,900 lb: 60 psi → 9,800 + 48 × 482 = 32,936 lb (affine fit, two points)
+    expect(checks.body.gaugeEstimates[0].loadLb).toBeCloseTo(32_936, 0);
+    const wrong = await t.http().post(`/api/moves/${m.id}/run-sheet/acknowledgement`).set(as('driver')).send({ fingerprint: 'f'.repeat(64) });
+    expect(wrong.status).toBe(409);
+    const ack = await t.http().post(`/api/moves/${m.id}/run-sheet/acknowledgement`).set(as('driver')).send({ fingerprint: sheet.fingerprint });
+    expect(ack.status).toBe(201);
+    expect(ack.body.acknowledgement).toMatchObject({ current: true, fingerprint: sheet.fingerprint });
+    const run = await t.http().post(`/api/moves/${m.id}/stage`).set(as('dispatcher')).send({ to: 'running' });
+    expect(run.status).toBe(201);
+    expect(run.body.stage).toBe('running');
+  });
+
+  it('a change to the plan after the acknowledgement voids it and asks for a new one', async () => {
+    const { m, sheet } = await readyMove();
+    await t.http().post(`/api/moves/${m.id}/departure-checks`).set(as('driver')).send(goodChecks(sheet)).expect(201);
+    await t.http().post(`/api/moves/${m.id}/run-sheet/acknowledgement`).set(as('driver')).send({ fingerprint: sheet.fingerprint }).expect(201);
+    const cur = (await t.http().get(`/api/moves/${m.id}`).set(as('dispatcher'))).body;
+    await t.http().patch(`/api/moves/${m.id}`).set(as('dispatcher')).send({ version: cur.version, sliderSettingFt: 36 }).expect(200);
+    const after = (await t.http().get(`/api/moves/${m.id}/run-sheet`).set(as('driver'))).body;
+    expect(after.fingerprint).not.toBe(sheet.fingerprint);
+    expect(after.acknowledgement).toBeNull();
+    const run = await t.http().post(`/api/moves/${m.id}/stage`).set(as('dispatcher')).send({ to: 'running' });
+    expect(run.status).toBe(409);
+    expect(run.body.details.unmet.map((u: { code: string }) => u.code)).toContain('run_sheet_not_acknowledged');
+  });
+
+  it.each([
+    ['a height of zero', { measuredHeightIn: 0 }, 'measuredHeightIn'],
+    ['a width as text', { measuredWidthIn: 'wide' }, 'measuredWidthIn'],
+    ['an absurd gauge pressure', { gaugeReadings: [{ group: 'trailer', psi: 900 }] }, 'gaugeReadings[0].psi'],
+    ['a missing check', { tiresInflated: undefined }, 'tiresInflated'],
+  ])('rejects %s with 400 naming the field', async (_l, over, field) => {
+    const { m, sheet } = await readyMove();
+    const res = await t.http().post(`/api/moves/${m.id}/departure-checks`).set(as('driver')).send({ ...goodChecks(sheet), ...over });
+    expect(res.status).toBe(400);
+    expect(res.body.details.map((d: { field: string }) => d.field)).toContain(field);
+  });
+
+  it('prints a PDF with Noto Sans embedded, holding the move reference, the route and the cautions', async () => {
+    const { m } = await readyMove();
+    const res = await t.http().get(`/api/moves/${m.id}/run-sheet.pdf`).set(as('driver')).buffer(true).parse((r, cb) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('application/pdf');
+    const pdf = res.body as Buffer;
+    expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
+    const text = execFileSync('pdftotext', ['-layout', '-', '-'], { input: pdf }).toString();
+    expect(text).toContain(`Run sheet ${m.reference}`);
+    expect(text).toContain('FM 1960, US 290');
+    expect(text).toMatch(/certified scale/);
+    const fonts = execFileSync('pdffonts', ['-'], { input: pdf }).toString();
+    expect(fonts).toMatch(/NotoSans/);
+  });
+});

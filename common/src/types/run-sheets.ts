@@ -1,0 +1,82 @@
+import type { DimensionsResult } from '../engine/dimensions';
+import type { GaugeEstimate } from '../engine/air-gauge';
+import type { MarkingsResult } from '../engine/markings';
+import type { PlanCheckResult } from '../engine/plan-check';
+import type { TravelWindowsResult } from '../engine/travel-windows';
+import type { SecurementResult } from '../engine/securement';
+import type { MoveDto } from './moves';
+
+/** How far measured dimensions may exceed the planned or permitted ones before departure is blocked.
+ * Common practice, no published source: a tape read on a loaded trailer is good to about an inch. */
+export const DEPARTURE_TOLERANCE_IN = { height: 1, width: 1, length: 6 } as const;
+
+export type GaugeReading = { group: 'trailer'; psi: number };
+
+export type DepartureChecksRequest = {
+  measuredHeightIn: number;
+  measuredWidthIn: number;
+  measuredLengthIn: number;
+  sliderPinsLocked: boolean;
+  tiresInflated: boolean;
+  markingsInPlace: boolean;
+  permitsOnBoard: boolean;
+  gaugeReadings: GaugeReading[];
+};
+
+export type CheckFinding = { code: string; message: string; blocking: boolean };
+
+export type DepartureChecksDto = DepartureChecksRequest & {
+  id: string;
+  fingerprint: string;
+  outcome: 'passed' | 'blocked';
+  findings: CheckFinding[];
+  gaugeEstimates: (GaugeEstimate & { group: string; plannedLb: number })[];
+  submittedAt: string;
+  driver: { id: string; name: string };
+};
+
+export type AcknowledgeRequest = { fingerprint: string };
+
+export type RunSheetPermit = {
+  jurisdiction: string;
+  status: string;
+  number: string | null;
+  validFrom: string | null;
+  validTo: string | null;
+  conditions: string[];
+  documentUrl: string | null;
+  /** Set when the permit ends before the planned exit from its state. */
+  warning: string | null;
+};
+
+export type RunSheetEscort = {
+  jurisdiction: string | null;
+  position: string;
+  status: string;
+  vendor: string | null;
+  operator: string | null;
+  phone: string | null;
+  meetingPoint: string | null;
+  meetingTime: string | null;
+};
+
+export type RunSheetDto = {
+  move: MoveDto;
+  /** Changes whenever the plan, a permit or an escort booking changes: an acknowledgement holds for one fingerprint. */
+  fingerprint: string;
+  generatedAt: string;
+  dimensions: DimensionsResult;
+  /** The dimensions departure is checked against: the smallest permitted, else the plan's. */
+  checkAgainst: { heightIn: number; widthIn: number; lengthIn: number; source: 'permit' | 'plan' };
+  markings: MarkingsResult;
+  securement: (SecurementResult & { articleId: string })[];
+  axles: { steerLb: number; driveLb: number; trailerLb: number; grossLb: number; sliderSettingFt: number | null; federal: PlanCheckResult['federal'] };
+  travel: { jurisdiction: string; name: string; days: TravelWindowsResult[] }[];
+  earliestDeparture: string | null;
+  permits: RunSheetPermit[];
+  escorts: RunSheetEscort[];
+  gaugeCalibration: { psi: number; loadLb: number }[];
+  cautions: string[];
+  latestChecks: DepartureChecksDto | null;
+  acknowledgement: { at: string; fingerprint: string; current: boolean } | null;
+};
