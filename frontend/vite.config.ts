@@ -10,7 +10,7 @@ export default defineConfig({
     // the shared package is CommonJS in dist; the browser takes its TypeScript source
     alias: { '@amberline/common': fileURLToPath(new URL('../common/src/index.ts', import.meta.url)) },
   },
-  build: { chunkSizeWarningLimit: 900 },
+  build: { chunkSizeWarningLimit: 900, manifest: true },
   server: { host: '127.0.0.1', port: 5173, strictPort: true, proxy: { '/api': api } },
   preview: { host: '127.0.0.1', port: 4173, strictPort: true, proxy: { '/api': api } },
 });

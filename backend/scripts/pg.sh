@@ -39,7 +39,7 @@ case "${1:-}" in
     prep
     [ -f "$DATA/PG_VERSION" ] || as_pg "$PGBIN/initdb" -D "$DATA" -U postgres --auth=trust --encoding=UTF8 --locale=C.UTF-8 >/dev/null
     running || as_pg "$PGBIN/pg_ctl" -D "$DATA" -l "$DATA/server.log" -w -t 60 start \
-      -o "-h 127.0.0.1 -p $PGPORT -k $SOCK -c fsync=off -c synchronous_commit=off -c full_page_writes=off" >/dev/null
+      -o "-h 127.0.0.1 -p $PGPORT -k $SOCK -c fsync=off -c synchronous_commit=off -c full_page_writes=off ${PG_EXTRA_OPTS:-}" >/dev/null
     [ "$(as_pg "$PGBIN/psql" -h "$SOCK" -p "$PGPORT" -U postgres -d postgres -tAc \
         "select 1 from pg_database where datname='$DB'")" = 1 ] || as_pg "$PGBIN/createdb" -h "$SOCK" -p "$PGPORT" -U postgres "$DB"
     echo "postgres://postgres@127.0.0.1:$PGPORT/$DB" ;;

@@ -9,6 +9,13 @@ import { Public } from '../core/decorators/public.decorator';
 export class HealthController {
   constructor(private readonly ds: DataSource) {}
 
+  /** Liveness without touching the database: also the floor route of the benchmark. */
+  @Public()
+  @Get('live')
+  live(): { status: string } {
+    return { status: 'ok' };
+  }
+
   @Public()
   @Get()
   async health(@Res({ passthrough: true }) res: Response): Promise<{ status: string; db: string }> {

@@ -22,3 +22,19 @@ export async function seedUser(db: Db, input: SeedUserInput = {}): Promise<Seede
   );
   return { id: row.id, email, name, role, password };
 }
+
+/** Many users at once (one bcrypt hash shared by all: bulk data for benchmarks, never for real accounts). */
+export async function seedUsersBulk(db: Db, counts: Partial<Record<Role, number>>, tag: string, password = 'bench-password'): Promise<{ id: string; role: Role }[]> {
+  const hash = await bcrypt.hash(password, 10);
+  const out: { id: string; role: Role }[] = [];
+  for (const [role, n] of Object.entries(counts) as [Role, number][]) {
+    const rows = await db.query(
+      `INSERT INTO users (email, name, role, password_hash)
+       SELECT $1 || '.' || g || '@' || $2 || '.amberline.example', initcap($1) || ' ' || g, $1, $3 FROM generate_series(1, $4::int) g
+       RETURNING id, role`,
+      [role, tag, hash, n],
+    );
+    out.push(...rows);
+  }
+  return out;
+}
