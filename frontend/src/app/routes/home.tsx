@@ -1,5 +1,7 @@
 import { Alert, Card, Typography } from 'antd';
+import { Navigate } from 'react-router-dom';
 import type { Role } from '@amberline/common';
+import { paths } from '../../config/paths';
 import { useAuth } from '../../lib/auth';
 
 const ROLE_SUMMARY: Record<Role, string> = {
@@ -12,6 +14,8 @@ const ROLE_SUMMARY: Record<Role, string> = {
 export function HomePage() {
   const { user } = useAuth();
   if (!user) return null;
+  // a driver's work starts on the run sheets
+  if (user.role === 'driver') return <Navigate to={paths.runSheets} replace />;
   return (
     <div style={{ maxWidth: 900 }}>
       <Typography.Title level={2}>Good to see you, {user.name.split(' ')[0]}</Typography.Title>

@@ -1,0 +1,9 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { TractorDto } from '@amberline/common';
+import { api } from '../../../lib/api-client';
+
+export const getTractors = () => api<TractorDto[]>('/fleet/tractors');
+
+export const tractorsQueryOptions = () => queryOptions({ queryKey: ['fleet', 'tractors'], queryFn: getTractors, staleTime: 60_000 });
+
+export const useTractors = () => useQuery(tractorsQueryOptions());

@@ -1,0 +1,10 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { HistoryEntryDto } from '@amberline/common';
+import { api } from '../../../lib/api-client';
+
+export const getMoveHistory = (id: string) => api<HistoryEntryDto[]>(`/moves/${id}/history`);
+
+export const moveHistoryQueryOptions = (id: string) =>
+  queryOptions({ queryKey: ['moves', 'one', id, 'history'], queryFn: () => getMoveHistory(id) });
+
+export const useMoveHistory = (id: string) => useQuery(moveHistoryQueryOptions(id));

@@ -1,0 +1,9 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { MoveDto } from '@amberline/common';
+import { api } from '../../../lib/api-client';
+
+export const getMove = (id: string) => api<MoveDto>(`/moves/${id}`);
+
+export const moveQueryOptions = (id: string) => queryOptions({ queryKey: ['moves', 'one', id], queryFn: () => getMove(id) });
+
+export const useMove = (id: string | undefined) => useQuery({ ...moveQueryOptions(id ?? ''), enabled: !!id });

@@ -1,0 +1,10 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { RunSheetDto } from '@amberline/common';
+import { api } from '../../../lib/api-client';
+
+export const getRunSheet = (moveId: string) => api<RunSheetDto>(`/moves/${moveId}/run-sheet`);
+
+export const runSheetQueryOptions = (moveId: string) =>
+  queryOptions({ queryKey: ['run-sheets', 'one', moveId], queryFn: () => getRunSheet(moveId) });
+
+export const useRunSheet = (moveId: string | undefined) => useQuery({ ...runSheetQueryOptions(moveId ?? ''), enabled: !!moveId });

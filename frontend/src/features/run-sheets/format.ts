@@ -1,0 +1,46 @@
+import { formatFeetInches, formatPounds } from '@amberline/common';
+
+/** Feet and inches, or a dash for a value the engine could not give. */
+export const ftIn = (inches: number | null | undefined): string => (inches === null || inches === undefined || !Number.isFinite(inches) || inches < 0 ? '—' : formatFeetInches(inches));
+export const lb = (pounds: number | null | undefined): string => (pounds === null || pounds === undefined || !Number.isFinite(pounds) || pounds < 0 ? '—' : formatPounds(pounds));
+
+/** `2027-01-12` → `Tue 12 Jan 2027` (a calendar date, no time zone involved). */
+export function calendarDate(date: string | null | undefined): string {
+  if (!date) return '—';
+  const m = /^(\d{4})-(\d{2})-(\d{2})/.exec(date);
+  if (!m) return date;
+  const d = new Date(Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3])));
+  return new Intl.DateTimeFormat('en-US', { timeZone: 'UTC', weekday: 'short', day: 'numeric', month: 'short', year: 'numeric' }).format(d);
+}
+
+/** An instant in a jurisdiction's own zone: `Tue, Jan 12, 07:14 CST`. */
+export function localInstant(iso: string | null | undefined, timeZone?: string): string {
+  if (!iso) return '—';
+  const d = new Date(iso);
+  if (Number.isNaN(d.getTime())) return iso;
+  try {
+    return new Intl.DateTimeFormat('en-US', { timeZone, weekday: 'short', month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZoneName: 'short' }).format(d);
+  } catch {
+    return d.toISOString().slice(0, 16).replace('T', ' ') + ' UTC';
+  }
+}
+
+/** `HH:MM` wall clock of an instant in a zone. */
+export function localClock(iso: string | null | undefined, timeZone: string): string | null {
+  if (!iso) return null;
+  const d = new Date(iso);
+  if (Number.isNaN(d.getTime())) return null;
+  try {
+    return new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(d);
+  } catch {
+    return null;
+  }
+}
+
+/** `HH:MM` → minutes after midnight (24:00 → 1440). */
+export function minutesOf(hhmm: string | null | undefined): number | null {
+  const m = /^(\d{1,2}):(\d{2})$/.exec(hhmm ?? '');
+  return m ? Number(m[1]) * 60 + Number(m[2]) : null;
+}
+
+export const humanize = (code: string): string => code.replace(/_/g, ' ').replace(/-/g, ' ');
