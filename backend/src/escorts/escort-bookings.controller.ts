@@ -1,0 +1,38 @@
+import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import type { EscortBookingDto, MoveEscortsDto, SessionUser } from '@amberline/common';
+import { CurrentUser } from '../core/decorators/current-user.decorator';
+import { Roles } from '../core/decorators/roles.decorator';
+import { CancelEscortBookingDto, CreateEscortBookingDto } from './dto/escorts.dto';
+import { EscortBookingsService } from './escort-bookings.service';
+
+@ApiTags('escorts')
+@ApiBearerAuth()
+@Controller('moves/:moveId/escort-bookings')
+export class EscortBookingsController {
+  constructor(private readonly bookings: EscortBookingsService) {}
+
+  @Get()
+  @Roles('admin', 'dispatcher', 'permit_clerk')
+  list(@Param('moveId', new ParseUUIDPipe()) moveId: string, @CurrentUser() user: SessionUser): Promise<MoveEscortsDto> {
+    return this.bookings.forMove(moveId, user, new Date());
+  }
+
+  @Post()
+  @Roles('admin', 'dispatcher')
+  request(@Param('moveId', new ParseUUIDPipe()) moveId: string, @Body() dto: CreateEscortBookingDto, @CurrentUser() user: SessionUser): Promise<EscortBookingDto> {
+    return this.bookings.request(moveId, dto, user, new Date());
+  }
+
+  @Post(':bookingId/cancel')
+  @HttpCode(200)
+  @Roles('admin', 'dispatcher')
+  cancel(
+    @Param('moveId', new ParseUUIDPipe()) moveId: string,
+    @Param('bookingId', new ParseUUIDPipe()) bookingId: string,
+    @Body() dto: CancelEscortBookingDto,
+    @CurrentUser() user: SessionUser,
+  ): Promise<EscortBookingDto> {
+    return this.bookings.cancel(moveId, bookingId, dto, user);
+  }
+}

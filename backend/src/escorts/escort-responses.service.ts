@@ -1,0 +1,157 @@
+import { Injectable } from '@nestjs/common';
+import { DataSource, EntityManager } from 'typeorm';
+import {
+  answerWarnings, BOOKING_STATUS_LABELS, ESCORT_POSITION_LABELS, jurisdictionByCode, localDate, PLANNING_CAUTION,
+  type EscortAnswer, type EscortAnswerResult, type EscortRequestView,
+} from '@amberline/common';
+import { AuditService } from '../audit/audit.service';
+import { AppException, fieldError } from '../core/app-exception';
+import { MailService } from '../mail/mail.service';
+import { Move } from '../moves/entities/move.entity';
+import { Vendor } from '../vendors/entities/vendor.entity';
+import { EscortAnswerDto } from './dto/escorts.dto';
+import { EscortBooking } from './entities/escort-booking.entity';
+import { EscortResponseToken } from './entities/escort-response-token.entity';
+import { answerNotice, confirmationMail } from './escort-mails';
+import { hashToken, TOKEN_PATTERN } from './escort-tokens';
+
+/** Answers for a link that cannot be used. They say why, and nothing about the booking behind it. */
+const INVALID = () => new AppException(404, 'not_found', 'This link is not valid. Check that it was copied whole, or ask the dispatcher who sent it for a new one.', { link: 'invalid' });
+const EXPIRED = () => new AppException(410, 'not_found', 'This link has expired. Ask the dispatcher who sent it for a new one.', { link: 'expired' });
+const USED = () => new AppException(409, 'conflict', 'This link has already been used to answer. Call the dispatcher to change the answer.', { link: 'used' });
+const CLOSED = () => new AppException(409, 'conflict', 'This request is no longer open. Call the dispatcher if you have questions.', { link: 'closed' });
+
+const MAX_PROPOSAL_DAYS = 60;
+
+type Found = { token: EscortResponseToken; booking: EscortBooking; move: Move; vendor: Vendor };
+
+/** The vendor's side: the request behind a link, and the one answer it takes. No account; the link is the credential. */
+@Injectable()
+export class EscortResponsesService {
+  constructor(
+    private readonly ds: DataSource,
+    private readonly audit: AuditService,
+    private readonly mail: MailService,
+  ) {}
+
+  private async find(m: EntityManager, token: string, now: Date, lock: boolean): Promise<Found> {
+    if (!TOKEN_PATTERN.test(token)) throw INVALID();
+    const t = await m.findOne(EscortResponseToken, { where: { tokenHash: hashToken(token) }, ...(lock ? { lock: { mode: 'pessimistic_write' as const } } : {}) });
+    if (!t) throw INVALID();
+    const booking = await m.findOne(EscortBooking, { where: { id: t.bookingId }, ...(lock ? { lock: { mode: 'pessimistic_write' as const } } : {}) });
+    if (!booking) throw INVALID();
+    if (t.usedAt || booking.status === 'confirmed' || booking.status === 'declined' || booking.status === 'proposed') throw USED();
+    if (booking.status !== 'requested') throw CLOSED();
+    if (t.expiresAt.getTime() <= now.getTime()) throw EXPIRED();
+    const move = await m.findOneByOrFail(Move, { id: booking.moveId });
+    if (['running', 'delivered', 'cancelled'].includes(move.stage)) throw CLOSED();
+    const vendor = await m.findOneByOrFail(Vendor, { id: booking.vendorId });
+    return { token: t, booking, move, vendor };
+  }
+
+  async view(token: string, now: Date): Promise<EscortRequestView> {
+    const { token: t, booking: b, vendor: v } = await this.find(this.ds.manager, token, now, false);
+    const s = b.requestSummary;
+    return {
+      vendor: {
+        company: v.company,
+        operators: v.operators.map((o) => ({ name: o.name, phone: o.phone ?? null, certifications: o.certifications.map((c) => ({ state: c.state, number: c.number })) })),
+        vehicles: v.vehicles.map((x) => ({ label: x.label, plate: x.plate ?? null })),
+      },
+      requestedBy: s.requestedBy,
+      move: s.move,
+      position: b.position,
+      positionLabel: ESCORT_POSITION_LABELS[b.position],
+      seat: b.seat,
+      jurisdictions: b.jurisdictions,
+      startDate: b.startDate,
+      endDate: b.endDate,
+      meetingPoint: b.meetingPoint,
+      meetingTime: b.meetingTime,
+      notes: b.notes,
+      heightPoleSetIn: s.heightPoleSetIn,
+      certificationStates: s.certificationStates,
+      linkExpiresAt: t.expiresAt.toISOString(),
+      caution: `The issued permits govern escort positions, routes and travel times. ${PLANNING_CAUTION}`,
+    };
+  }
+
+  /** Validity windows of the move's issued permits, by jurisdiction (the permits table may not exist yet). */
+  private async permitWindows(m: EntityManager, move: Move, jurisdictions: string[]): Promise<{ code: string; from: string; to: string }[]> {
+    const [{ t }] = await m.query(`SELECT to_regclass('public.permits') IS NOT NULL AS t`);
+    if (!t) return [];
+    const rows: { jurisdiction: string; valid_from: Date; valid_to: Date }[] = await m.query(
+      `SELECT jurisdiction, valid_from, valid_to FROM permits
+       WHERE move_id = $1 AND status = 'issued' AND valid_from IS NOT NULL AND valid_to IS NOT NULL AND jurisdiction = ANY($2)`,
+      [move.id, jurisdictions],
+    );
+    return rows.map((r) => {
+      const tz = move.route.find((s) => s.jurisdiction === r.jurisdiction)?.timeZone ?? jurisdictionByCode(r.jurisdiction)?.timeZone ?? 'UTC';
+      return { code: r.jurisdiction, from: localDate(new Date(r.valid_from).getTime(), tz), to: localDate(new Date(r.valid_to).getTime(), tz) };
+    });
+  }
+
+  private async checkAnswer(m: EntityManager, dto: EscortAnswerDto, f: Found, now: Date): Promise<EscortAnswer> {
+    if (dto.decision === 'confirm') {
+      if (!dto.operatorName) throw fieldError('operatorName', 'name the operator who will drive the escort vehicle');
+      if (!dto.vehicle) throw fieldError('vehicle', 'name the escort vehicle (e.g. make, colour, plate)');
+      if (!dto.phone) throw fieldError('phone', 'give a phone number that reaches the operator on the road');
+      const certs = (dto.certifications ?? []).filter((c) => c.number);
+      return { decision: 'confirm', operatorName: dto.operatorName, vehicle: dto.vehicle, phone: dto.phone, certifications: certs, ...(dto.note ? { note: dto.note } : {}) };
+    }
+    if (dto.decision === 'decline') {
+      if (!dto.reason) throw fieldError('reason', 'say why you decline, so the dispatcher can plan');
+      return { decision: 'decline', reason: dto.reason };
+    }
+    const { proposedStart: start, proposedEnd: end } = dto;
+    if (!start) throw fieldError('proposedStart', 'give the first day you could run, YYYY-MM-DD');
+    if (!end) throw fieldError('proposedEnd', 'give the last day of the run you propose, YYYY-MM-DD');
+    for (const [field, d] of [['proposedStart', start], ['proposedEnd', end]] as const) {
+      if (Number.isNaN(Date.parse(`${d}T00:00:00Z`)) || new Date(`${d}T00:00:00Z`).toISOString().slice(0, 10) !== d) throw fieldError(field, 'is not a real date');
+    }
+    if (end < start) throw fieldError('proposedEnd', 'must not be before proposedStart');
+    const today = localDate(now.getTime(), f.booking.requestSummary.timeZone);
+    if (start <= today) throw fieldError('proposedStart', `must be after today (${today})`);
+    if ((Date.parse(end) - Date.parse(start)) / 86_400_000 + 1 > MAX_PROPOSAL_DAYS) throw fieldError('proposedEnd', `a run of at most ${MAX_PROPOSAL_DAYS} days`);
+    if (start === f.booking.startDate && end === f.booking.endDate) throw fieldError('proposedStart', 'these are the requested dates; confirm instead');
+    for (const w of await this.permitWindows(m, f.move, f.booking.jurisdictions)) {
+      const name = jurisdictionByCode(w.code)?.name ?? w.code;
+      if (start < w.from || end > w.to) {
+        throw fieldError(start < w.from ? 'proposedStart' : 'proposedEnd', `the ${name} permit for this move is valid ${w.from} to ${w.to}; propose dates inside it, or call the dispatcher`);
+      }
+    }
+    return { decision: 'propose', proposedStart: start, proposedEnd: end, ...(dto.note ? { note: dto.note } : {}) };
+  }
+
+  /** Records the one answer a link takes. Everything (booking, token, audit, e-mails) in one transaction. */
+  async answer(token: string, dto: EscortAnswerDto, now: Date): Promise<EscortAnswerResult> {
+    return this.ds.transaction(async (m) => {
+      const f = await this.find(m, token, now, true);
+      const answer = await this.checkAnswer(m, dto, f, now);
+      const b = f.booking;
+      const newWarnings = answer.decision === 'confirm' ? answerWarnings(b.jurisdictions, answer.certifications ?? []) : [];
+      b.status = answer.decision === 'confirm' ? 'confirmed' : answer.decision === 'decline' ? 'declined' : 'proposed';
+      b.answer = answer;
+      b.respondedAt = now;
+      b.warnings = [...b.warnings, ...newWarnings];
+      b.version += 1;
+      await m.save(b);
+      // every link of this booking is spent by one answer
+      await m.query(`UPDATE escort_response_tokens SET used_at = $2 WHERE booking_id = $1 AND used_at IS NULL`, [b.id, now]);
+      await this.audit.record(m, {
+        moveId: b.moveId, entity: 'escort_booking', entityId: b.id, action: 'answered', actorId: null,
+        before: { status: 'requested' }, after: { status: b.status, by: f.vendor.company, answer }, reason: answer.reason ?? null,
+      });
+      if (answer.decision === 'confirm') await this.mail.enqueue(m, confirmationMail(b, f.vendor));
+      const dispatcher = b.requestSummary.requestedBy?.email;
+      if (dispatcher) await this.mail.enqueue(m, answerNotice(b, f.vendor, dispatcher));
+      const message =
+        answer.decision === 'confirm'
+          ? 'Thank you: the escort is booked. A confirmation with a calendar file is on its way to you.'
+          : answer.decision === 'decline'
+            ? 'Thank you: the dispatcher has your answer and will ask someone else.'
+            : 'Thank you: the dispatcher has your proposed dates and will be in touch.';
+      return { decision: answer.decision, status: b.status, message: `${BOOKING_STATUS_LABELS[b.status]}. ${message}`, warnings: newWarnings };
+    });
+  }
+}

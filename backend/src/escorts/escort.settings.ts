@@ -1,0 +1,11 @@
+import { ConfigService } from '@nestjs/config';
+import { intervalFrom } from '../mail/mail.settings';
+
+export type EscortSettings = {
+  /** How often reminders are looked for, in ms; 0 = no schedule (call `EscortRemindersService.run(now)` yourself). */
+  reminderIntervalMs: number;
+};
+export const ESCORT_SETTINGS = Symbol('ESCORT_SETTINGS');
+export const escortSettingsFrom = (config: ConfigService): EscortSettings => ({
+  reminderIntervalMs: intervalFrom(config, 'ESCORT_REMINDER_INTERVAL_MS', 300_000),
+});

@@ -1,0 +1,65 @@
+import { Injectable, OnModuleInit } from '@nestjs/common';
+import { In } from 'typeorm';
+import { jurisdictionByCode, slotLabel, type UnmetCondition } from '@amberline/common';
+import { AuditService } from '../audit/audit.service';
+import { MoveExtensionsRegistry, type MoveExtension, type PlanChangeContext, type TransitionContext } from '../moves/move-extensions';
+import { MovesService } from '../moves/moves.service';
+import { EscortBooking } from './entities/escort-booking.entity';
+import { ACTIVE_STATUSES, coverageOf } from './escort-bookings.service';
+
+const STATUS_TEXT = { requested: 'awaiting the vendor\u2019s answer', proposed: 'the vendor proposed other dates', open: 'not booked', confirmed: 'confirmed' } as const;
+const name = (code: string) => jurisdictionByCode(code)?.name ?? code;
+
+/**
+ * The escort guard: `permits_received → escorts_booked` only when every position the assessment requires is
+ * confirmed, for its jurisdictions and the move's dates. It recomputes from the current assessment, so a plan
+ * change that raises the requirement shows as unmet again.
+ */
+@Injectable()
+export class EscortsWorkflow implements MoveExtension, OnModuleInit {
+  readonly name = 'escorts';
+
+  constructor(
+    private readonly registry: MoveExtensionsRegistry,
+    private readonly moves: MovesService,
+    private readonly audit: AuditService,
+  ) {}
+
+  onModuleInit(): void {
+    this.registry.register(this);
+  }
+
+  async unmetConditions(ctx: TransitionContext): Promise<UnmetCondition[]> {
+    if (ctx.to !== 'escorts_booked') return [];
+    const coverage = await coverageOf(ctx.manager, ctx.move, ctx.assessment);
+    return coverage.flatMap((s) =>
+      s.jurisdictions
+        .filter((j) => j.status !== 'confirmed')
+        .map((j) => ({ code: 'escort_unconfirmed', jurisdiction: j.code, message: `${slotLabel(s.position, s.seat)} escort in ${j.name}: ${STATUS_TEXT[j.status]}` })),
+    );
+  }
+
+  async transitionNotes(ctx: TransitionContext): Promise<string[]> {
+    if (ctx.to !== 'escorts_booked') return [];
+    const coverage = await coverageOf(ctx.manager, ctx.move, ctx.assessment);
+    if (!coverage.length) {
+      const codes = ctx.assessment.result.jurisdictions.map((j) => `${j.name} (rulebook v${ctx.assessment.ruleVersions[j.code] ?? '–'})`);
+      return [`no escort needed: the assessment asks for no escort in ${codes.join(', ')}`];
+    }
+    return coverage.map((s) => `${slotLabel(s.position, s.seat)} confirmed: ${s.jurisdictions.map((j) => `${j.code} by ${j.vendor}`).join(', ')}`);
+  }
+
+  /** A plan change may need more escorts, other dates or other states: record which positions it left unmet. */
+  async onPlanChanged(ctx: PlanChangeContext): Promise<void> {
+    const active = await ctx.manager.count(EscortBooking, { where: { moveId: ctx.after.id, status: In([...ACTIVE_STATUSES]) } });
+    if (!active) return;
+    const assessment = await this.moves.assessmentOf(ctx.after, new Date(), ctx.manager);
+    const coverage = await coverageOf(ctx.manager, ctx.after, assessment);
+    const unmet = coverage.flatMap((s) => s.jurisdictions.filter((j) => j.status !== 'confirmed').map((j) => `${slotLabel(s.position, s.seat)} in ${name(j.code)}: ${STATUS_TEXT[j.status]}`));
+    if (!unmet.length) return;
+    await this.audit.record(ctx.manager, {
+      moveId: ctx.after.id, entity: 'move', entityId: ctx.after.id, action: 'escorts_unmet', actorId: ctx.actor.id,
+      after: { changed: ctx.changed, unmet }, reason: 'plan changed',
+    });
+  }
+}

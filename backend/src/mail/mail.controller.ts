@@ -1,0 +1,26 @@
+import { Controller, Get, Param, ParseUUIDPipe, Post, Query } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import type { OutboxMessageDto } from '@amberline/common';
+import { Roles } from '../core/decorators/roles.decorator';
+import { OutboxQuery } from './dto/outbox.dto';
+import { MailService } from './mail.service';
+
+/** The outbox as the admin sees it: what is waiting, what went out (with the SMTP message id), what failed. */
+@ApiTags('mail')
+@ApiBearerAuth()
+@Controller('mail/outbox')
+export class MailController {
+  constructor(private readonly mail: MailService) {}
+
+  @Get()
+  @Roles('admin')
+  list(@Query() q: OutboxQuery): Promise<OutboxMessageDto[]> {
+    return this.mail.list(q.status, q.limit);
+  }
+
+  @Post(':id/retry')
+  @Roles('admin')
+  retry(@Param('id', new ParseUUIDPipe()) id: string): Promise<OutboxMessageDto> {
+    return this.mail.retry(id, new Date());
+  }
+}

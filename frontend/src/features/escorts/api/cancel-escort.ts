@@ -1,0 +1,15 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { CancelEscortBookingRequest, EscortBookingDto } from '@amberline/common';
+import { api } from '../../../lib/api-client';
+
+export const cancelEscort = ({ moveId, bookingId, ...body }: CancelEscortBookingRequest & { moveId: string; bookingId: string }) =>
+  api<EscortBookingDto>(`/moves/${moveId}/escort-bookings/${bookingId}/cancel`, { method: 'POST', json: body });
+
+export const useCancelEscort = () => {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: cancelEscort,
+    onSuccess: (_b, v) =>
+      Promise.all([qc.invalidateQueries({ queryKey: ['escorts', 'move', v.moveId] }), qc.invalidateQueries({ queryKey: ['moves', 'one', v.moveId, 'history'] })]),
+  });
+};
