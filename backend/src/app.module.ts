@@ -16,7 +16,12 @@ import { UsersModule } from './users/users.module';
 import { AuditModule } from './audit/audit.module';
 import { FleetModule } from './fleet/fleet.module';
 import { MovesModule } from './moves/moves.module';
+import { PermitsModule } from './permits/permits.module';
 import { RulebookModule } from './rulebook/rulebook.module';
+import { RunSheetsModule } from './run-sheets/run-sheets.module';
+import { MailModule } from './mail/mail.module';
+import { VendorsModule } from './vendors/vendors.module';
+import { EscortsModule } from './escorts/escorts.module';
 
 function frontendModules(): DynamicModule[] {
   const dist = resolve(process.env.FRONTEND_DIST ?? join(__dirname, '..', '..', 'frontend', 'dist'));
@@ -44,6 +49,11 @@ function frontendModules(): DynamicModule[] {
     FleetModule,
     RulebookModule,
     MovesModule,
+    PermitsModule,
+    RunSheetsModule,
+    MailModule,
+    VendorsModule,
+    EscortsModule,
   ],
   providers: [
     { provide: APP_PIPE, useFactory: createValidationPipe },

@@ -32,6 +32,66 @@ export class EnvironmentVariables {
   @IsOptional()
   @IsIn(['development', 'production', 'test'])
   NODE_ENV = 'development';
+
+  // Payments (permits module). Read when the Stripe client is made; without them the local fake's defaults apply:
+  // key sk_test_amberline_local, 127.0.0.1:12111 over http, webhook secret whsec_amberline_local.
+  @IsOptional()
+  @Matches(/^sk_(test|live)_[A-Za-z0-9_]+$/, { message: 'STRIPE_SECRET_KEY must look like sk_test_…' })
+  STRIPE_SECRET_KEY?: string;
+
+  @IsOptional()
+  @IsString()
+  STRIPE_API_HOST?: string;
+
+  @IsOptional()
+  @Matches(/^\d{1,5}$/, { message: 'STRIPE_API_PORT must be a port number' })
+  STRIPE_API_PORT?: string;
+
+  @IsOptional()
+  @IsIn(['http', 'https'])
+  STRIPE_API_PROTOCOL?: string;
+
+  @IsOptional()
+  @Matches(/^whsec_[A-Za-z0-9_]+$/, { message: 'STRIPE_WEBHOOK_SECRET must look like whsec_…' })
+  STRIPE_WEBHOOK_SECRET?: string;
+
+  /** Where permit PDFs are stored (by SHA-256); default `.data/files` under the project. */
+  @IsOptional()
+  @IsString()
+  FILE_STORE_DIR?: string;
+
+  // Mail (escorts module): nodemailer over SMTP to the local catcher `npm start` runs (maildev on 1025).
+  @IsOptional()
+  @IsString()
+  SMTP_HOST = '127.0.0.1';
+
+  @IsOptional()
+  @Matches(/^\d{1,5}$/, { message: 'SMTP_PORT must be a port number' })
+  SMTP_PORT = '1025';
+
+  @IsOptional()
+  @Matches(/^(.+<[^@\s]+@[^@\s]+>|[^@\s<>]+@[^@\s<>]+)$/, { message: 'MAIL_FROM must be an address, or "Name <address>"' })
+  MAIL_FROM = 'Amberline dispatch <dispatch@amberline.example>';
+
+  /** Base of links in e-mails (the vendor's answer page). */
+  @IsOptional()
+  @Matches(/^https?:\/\/[^\s/]+(\/[^\s]*)?$/, { message: 'APP_URL must be an http(s) URL' })
+  APP_URL = 'http://127.0.0.1:3000';
+
+  /** Outbox channel this instance sends; instances on one database share `default`. */
+  @IsOptional()
+  @Matches(/^[a-z0-9._-]{1,80}$/, { message: 'MAIL_CHANNEL must be 1–80 of a-z, 0-9, . _ -' })
+  MAIL_CHANNEL = 'default';
+
+  /** How often the outbox worker runs, in ms; 0 turns the schedule off. Unset: 5 s, or off when NODE_ENV=test. */
+  @IsOptional()
+  @Matches(/^\d{1,8}$/, { message: 'MAIL_SEND_INTERVAL_MS must be a whole number of milliseconds' })
+  MAIL_SEND_INTERVAL_MS?: string;
+
+  /** How often escort reminders are looked for, in ms; 0 turns the schedule off. Unset: 5 min, or off when NODE_ENV=test. */
+  @IsOptional()
+  @Matches(/^\d{1,8}$/, { message: 'ESCORT_REMINDER_INTERVAL_MS must be a whole number of milliseconds' })
+  ESCORT_REMINDER_INTERVAL_MS?: string;
 }
 
 export function validateEnv(config: Record<string, unknown>): EnvironmentVariables {

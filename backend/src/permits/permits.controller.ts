@@ -1,0 +1,115 @@
+import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Patch, Post, Query, StreamableFile, UploadedFile, UseInterceptors } from '@nestjs/common';
+import { FileInterceptor } from '@nestjs/platform-express';
+import { ApiBearerAuth, ApiConsumes, ApiTags } from '@nestjs/swagger';
+import type {
+  AssignPermitsResponse, ExpiryScanResult, PaymentDto, PermitDocumentDto, PermitDto, PermitOverviewDto, PermitsPage, SessionUser, SyncPermitsResponse,
+} from '@amberline/common';
+import { CurrentUser } from '../core/decorators/current-user.decorator';
+import { Roles } from '../core/decorators/roles.decorator';
+import { DocumentsService, MAX_PDF_BYTES, type UploadedPdf } from './documents.service';
+import { AssignPermitsDto, ListPermitsQuery, PayPermitDto, RefundPermitDto, UpdatePermitDto } from './dto/permit.dto';
+import { ExpiryScanService } from './expiry-scan.service';
+import { PaymentsService } from './payments/payments.service';
+import { PermitsService } from './permits.service';
+
+const uuid = new ParseUUIDPipe();
+
+@ApiTags('permits')
+@ApiBearerAuth()
+@Controller()
+export class PermitsController {
+  constructor(
+    private readonly permits: PermitsService,
+    private readonly documents: DocumentsService,
+    private readonly payments: PaymentsService,
+    private readonly scan: ExpiryScanService,
+  ) {}
+
+  @Get('permits')
+  @Roles('admin', 'dispatcher', 'permit_clerk')
+  list(@Query() q: ListPermitsQuery, @CurrentUser() user: SessionUser): Promise<PermitsPage> {
+    return this.permits.list(q, user, new Date());
+  }
+
+  @Get('permits/overview')
+  @Roles('admin', 'dispatcher', 'permit_clerk')
+  overview(): Promise<PermitOverviewDto> {
+    return this.permits.overview(new Date());
+  }
+
+  @Get('permits/assignees')
+  @Roles('admin', 'dispatcher', 'permit_clerk')
+  assignees(): Promise<{ id: string; name: string; role: string }[]> {
+    return this.permits.assignees();
+  }
+
+  @Post('permits/assign')
+  @HttpCode(200)
+  @Roles('admin', 'permit_clerk')
+  assign(@Body() dto: AssignPermitsDto, @CurrentUser() user: SessionUser): Promise<AssignPermitsResponse> {
+    return this.permits.assign(dto, user, new Date());
+  }
+
+  @Post('permits/expiry-scan')
+  @HttpCode(200)
+  @Roles('admin', 'permit_clerk')
+  expiryScan(): Promise<ExpiryScanResult> {
+    return this.scan.scan(new Date());
+  }
+
+  @Get('permits/:id')
+  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  get(@Param('id', uuid) id: string, @CurrentUser() user: SessionUser): Promise<PermitDto> {
+    return this.permits.get(id, user, new Date());
+  }
+
+  @Patch('permits/:id')
+  @Roles('admin', 'permit_clerk')
+  update(@Param('id', uuid) id: string, @Body() dto: UpdatePermitDto, @CurrentUser() user: SessionUser): Promise<PermitDto> {
+    return this.permits.update(id, dto, user, new Date());
+  }
+
+  @Get('moves/:id/permits')
+  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  forMove(@Param('id', uuid) id: string, @CurrentUser() user: SessionUser): Promise<PermitDto[]> {
+    return this.permits.forMove(id, user, new Date());
+  }
+
+  @Post('moves/:id/permits/sync')
+  @HttpCode(200)
+  @Roles('admin', 'dispatcher', 'permit_clerk')
+  sync(@Param('id', uuid) id: string, @CurrentUser() user: SessionUser): Promise<SyncPermitsResponse> {
+    return this.permits.syncForMove(id, user, new Date());
+  }
+
+  @Post('permits/:id/documents')
+  @Roles('admin', 'permit_clerk')
+  @ApiConsumes('multipart/form-data')
+  @UseInterceptors(FileInterceptor('file', { limits: { fileSize: MAX_PDF_BYTES, files: 1, fields: 5 } }))
+  upload(@Param('id', uuid) id: string, @UploadedFile() file: UploadedPdf | undefined, @CurrentUser() user: SessionUser): Promise<PermitDocumentDto> {
+    return this.documents.upload(id, file, user);
+  }
+
+  @Get('permits/:id/documents/:docId')
+  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  async download(@Param('id', uuid) id: string, @Param('docId', uuid) docId: string, @CurrentUser() user: SessionUser): Promise<StreamableFile> {
+    const f = await this.documents.open(id, docId, user);
+    return new StreamableFile(f.stream, {
+      type: f.contentType,
+      length: f.size,
+      disposition: `attachment; filename="${f.fileName}"; filename*=UTF-8''${encodeURIComponent(f.fileName)}`,
+    });
+  }
+
+  @Post('permits/:id/payments')
+  @Roles('admin', 'permit_clerk')
+  pay(@Param('id', uuid) id: string, @Body() dto: PayPermitDto, @CurrentUser() user: SessionUser): Promise<PaymentDto> {
+    return this.payments.pay(id, dto, user, new Date());
+  }
+
+  @Post('permits/:id/refunds')
+  @Roles('admin', 'permit_clerk')
+  refund(@Param('id', uuid) id: string, @Body() dto: RefundPermitDto, @CurrentUser() user: SessionUser): Promise<PaymentDto> {
+    return this.payments.refund(id, dto, user, new Date());
+  }
+}

@@ -1,0 +1,420 @@
+import { Injectable, OnModuleInit } from '@nestjs/common';
+import { DataSource, EntityManager, In, Not } from 'typeorm';
+import {
+  canPermitTransition, PERMIT_STATUS_LABELS, PERMIT_STATUSES,
+  type AssessmentDto, type AssignPermitsResponse, type PermitDto, type PermitOverviewDto, type PermitsPage, type PermitStatus, type PermitSummaryDto,
+  type SessionUser, type SyncPermitsResponse, type UnmetCondition,
+} from '@amberline/common';
+import { AuditService, diff } from '../audit/audit.service';
+import { AppException, fieldError } from '../core/app-exception';
+import { travelDates } from '../moves/assessment.service';
+import { Move } from '../moves/entities/move.entity';
+import { MoveExtensionsRegistry, type PlanChangeContext, type TransitionContext } from '../moves/move-extensions';
+import { MovesService } from '../moves/moves.service';
+import { User } from '../users/entities/user.entity';
+import { AssignPermitsDto, ListPermitsQuery, UpdatePermitDto } from './dto/permit.dto';
+import { PermitDocument } from './entities/permit-document.entity';
+import { PermitPayment } from './entities/permit-payment.entity';
+import { PermitVersion } from './entities/permit-version.entity';
+import { Permit } from './entities/permit.entity';
+import { PERMIT_SUMMARY_SQL, snapshotOf, toDocumentDto, toPaymentDto, toSummaryDto, toVersionDto, type PermitRow } from './permit-mappers';
+import { cents, factsFromAssessment, instantToLocal, localToInstant, permittedDifferences, travelSpan, zoneOf } from './permit-rules';
+
+/** Move stages in which permits still matter (the expiry scan and the lists look only at these). */
+export const ACTIVE_MOVE_STAGES = ['requested', 'permits_received', 'escorts_booked', 'running'] as const;
+
+const SORTS: Record<string, string> = {
+  urgency: `CASE WHEN p.status IN ('issued','void') THEN 1 ELSE 0 END, (m.requested_departure - p.lead_time_days) ASC, m.requested_departure ASC`,
+  departure: 'm.requested_departure ASC, p.jurisdiction ASC',
+  '-departure': 'm.requested_departure DESC, p.jurisdiction ASC',
+  jurisdiction: 'p.jurisdiction ASC, m.requested_departure ASC',
+  status: `array_position(ARRAY['to_file','needs_amendment','rejected','filed','issued','void']::varchar[], p.status), m.requested_departure ASC`,
+  updated: 'p.updated_at DESC',
+};
+
+type Change = { action: string; reason?: string | null };
+
+@Injectable()
+export class PermitsService implements OnModuleInit {
+  constructor(
+    private readonly ds: DataSource,
+    private readonly audit: AuditService,
+    private readonly moves: MovesService,
+    private readonly registry: MoveExtensionsRegistry,
+  ) {}
+
+  onModuleInit(): void {
+    this.registry.register({
+      name: 'permits',
+      unmetConditions: (ctx) => this.unmetConditions(ctx),
+      onPlanChanged: (ctx) => this.onPlanChanged(ctx),
+    });
+  }
+
+  // ---------------------------------------------------------------- reading
+
+  private async rows(where: string, params: unknown[], manager?: EntityManager, tail = ''): Promise<PermitRow[]> {
+    return (manager ?? this.ds.manager).query(`${PERMIT_SUMMARY_SQL} WHERE ${where} ${tail}`, params);
+  }
+
+  async list(q: ListPermitsQuery, viewer: SessionUser, now: Date): Promise<PermitsPage> {
+    const where: string[] = [];
+    const params: unknown[] = [];
+    const add = (sql: string, v: unknown) => {
+      params.push(v);
+      where.push(sql.replace('?', `$${params.length}`));
+    };
+    if (q.status) add('p.status = ?', q.status);
+    else where.push(`p.status <> 'void'`);
+    if (q.jurisdiction) add('p.jurisdiction = ?', q.jurisdiction);
+    if (q.moveId) add('p.move_id = ?', q.moveId);
+    if (q.assignee === 'none') where.push('p.assignee_id IS NULL');
+    else if (q.assignee) add('p.assignee_id = ?', q.assignee === 'me' ? viewer.id : q.assignee);
+    const cond = where.length ? where.join(' AND ') : 'true';
+    const [{ n }] = await this.ds.query(`SELECT count(*)::int AS n FROM permits p WHERE ${cond}`, params);
+    const rows = await this.rows(cond, params, undefined, `ORDER BY ${SORTS[q.sort] ?? SORTS.urgency}, p.id LIMIT ${q.pageSize} OFFSET ${(q.page - 1) * q.pageSize}`);
+    return { items: rows.map((r) => toSummaryDto(r, now)), total: n, page: q.page, pageSize: q.pageSize };
+  }
+
+  async overview(now: Date): Promise<PermitOverviewDto> {
+    const counts = Object.fromEntries(PERMIT_STATUSES.map((s) => [s, 0])) as Record<PermitStatus, number>;
+    const byStatus: { status: PermitStatus; n: number }[] = await this.ds.query(`SELECT status, count(*)::int AS n FROM permits GROUP BY status`);
+    for (const r of byStatus) counts[r.status] = r.n;
+    const active = `m.stage IN (${ACTIVE_MOVE_STAGES.map((s) => `'${s}'`).join(',')})`;
+    const expiring = await this.rows(
+      `${active} AND p.status = 'issued' AND (p.expiry_warning IS NOT NULL OR p.valid_to < $1::timestamptz + interval '7 days')`,
+      [now.toISOString()],
+      undefined,
+      'ORDER BY p.valid_to ASC NULLS LAST, p.id LIMIT 50',
+    );
+    const amend = await this.rows(`${active} AND p.status = 'needs_amendment'`, [], undefined, 'ORDER BY m.requested_departure ASC, p.id LIMIT 50');
+    const [{ overdue }] = await this.ds.query(
+      `SELECT count(*)::int AS overdue FROM permits p JOIN moves m ON m.id = p.move_id
+        WHERE ${active} AND p.status NOT IN ('issued','void') AND (m.requested_departure - p.lead_time_days) < $1::date`,
+      [now.toISOString().slice(0, 10)],
+    );
+    return { counts, overdue, expiringSoon: expiring.map((r) => toSummaryDto(r, now)), needsAmendment: amend.map((r) => toSummaryDto(r, now)) };
+  }
+
+  /** The permit row, 404 when missing or (for a driver) not on one of their moves. */
+  async load(id: string, viewer?: SessionUser, manager?: EntityManager): Promise<Permit> {
+    const p = await (manager ?? this.ds.manager).findOne(Permit, { where: { id }, relations: { move: true } });
+    if (!p || (viewer?.role === 'driver' && p.move?.driverId !== viewer.id)) throw new AppException(404, 'not_found', `No permit ${id}`);
+    return p;
+  }
+
+  async get(id: string, viewer: SessionUser, now: Date): Promise<PermitDto> {
+    const p = await this.load(id, viewer);
+    return (await this.details([p], now))[0];
+  }
+
+  async forMove(moveId: string, viewer: SessionUser, now: Date): Promise<PermitDto[]> {
+    await this.moves.get(moveId, viewer);
+    const list = await this.ds.manager.find(Permit, { where: { moveId }, relations: { move: true }, order: { jurisdiction: 'ASC', createdAt: 'ASC' } });
+    return this.details(list, now);
+  }
+
+  private async details(list: Permit[], now: Date): Promise<PermitDto[]> {
+    if (!list.length) return [];
+    const ids = list.map((p) => p.id);
+    const rows = new Map((await this.rows('p.id = ANY($1)', [ids])).map((r) => [r.id, r]));
+    const docs = await this.ds.manager.find(PermitDocument, { where: { permitId: In(ids) }, relations: { uploadedBy: true }, order: { version: 'DESC' } });
+    const pays = await this.ds.manager.find(PermitPayment, { where: { permitId: In(ids) }, relations: { createdBy: true }, order: { attempt: 'DESC' } });
+    const versions = await this.ds.manager.find(PermitVersion, { where: { permitId: In(ids) }, relations: { createdBy: true }, order: { version: 'DESC' } });
+    return list.map((p) => {
+      const tz = zoneOf(p.jurisdiction);
+      const ctx = { moveReference: p.move?.reference ?? '', jurisdiction: p.jurisdiction, permitNumber: p.permitNumber };
+      return {
+        ...toSummaryDto(rows.get(p.id)!, now),
+        filedAt: p.filedAt?.toISOString() ?? null,
+        issuedAt: p.issuedAt?.toISOString() ?? null,
+        validFromLocal: p.validFrom ? instantToLocal(p.validFrom, tz) : null,
+        validToLocal: p.validTo ? instantToLocal(p.validTo, tz) : null,
+        permitted: p.permitted,
+        routeText: p.routeText,
+        conditions: p.conditions ?? {},
+        conditionsText: p.conditionsText,
+        notes: p.notes,
+        refundable: p.refundable,
+        ruleVersion: p.ruleVersion,
+        needed: p.needed,
+        documents: docs.filter((d) => d.permitId === p.id).map(toDocumentDto),
+        payments: pays.filter((x) => x.permitId === p.id).map((x) => toPaymentDto(x, ctx)),
+        history: versions.filter((v) => v.permitId === p.id).map(toVersionDto),
+      };
+    });
+  }
+
+  // ---------------------------------------------------------------- writing
+
+  /** Saves a changed permit: version up, a history snapshot, and the audit entry, all in `m`'s transaction. */
+  private async saveChange(m: EntityManager, before: Permit, after: Permit, actor: SessionUser | null, change: Change, now: Date): Promise<void> {
+    const b = snapshotOf(before);
+    const a = snapshotOf(after);
+    const d = diff(b, a);
+    if (!Object.keys(d.after).length) return;
+    after.version = before.version + 1;
+    after.updatedAt = now;
+    const res = await m
+      .createQueryBuilder()
+      .update(Permit)
+      .set({
+        status: after.status, permitType: after.permitType, needed: after.needed, permitNumber: after.permitNumber, filedAt: after.filedAt, issuedAt: after.issuedAt,
+        validFrom: after.validFrom, validTo: after.validTo, permitted: after.permitted, routeText: after.routeText, conditions: after.conditions,
+        conditionsText: after.conditionsText, estimatedFeeCents: after.estimatedFeeCents, actualFeeCents: after.actualFeeCents, refundable: after.refundable,
+        ruleVersion: after.ruleVersion, leadTimeDays: after.leadTimeDays, assigneeId: after.assigneeId, notes: after.notes, amendmentReason: after.amendmentReason,
+        expiryWarning: after.expiryWarning, version: after.version, updatedAt: now,
+      })
+      .where('id = :id AND version = :v', { id: before.id, v: before.version })
+      .execute();
+    if (res.affected !== 1) throw new AppException(409, 'conflict', 'This permit was changed by someone else; reload it');
+    await m.insert(PermitVersion, { permitId: after.id, version: after.version, status: after.status, snapshot: a, reason: change.reason ?? null, createdById: actor?.id ?? null });
+    await this.audit.record(m, {
+      moveId: after.moveId, entity: 'permit', entityId: after.id, action: change.action, actorId: actor?.id ?? null, before: d.before, after: { jurisdiction: after.jurisdiction, ...d.after }, reason: change.reason ?? null,
+    });
+  }
+
+  async syncForMove(moveId: string, actor: SessionUser, now: Date): Promise<SyncPermitsResponse> {
+    const out = await this.ds.transaction(async (m) => {
+      const locked = await m.findOne(Move, { where: { id: moveId }, lock: { mode: 'pessimistic_write' } });
+      if (!locked) throw new AppException(404, 'not_found', `No move ${moveId}`);
+      if (locked.stage === 'delivered' || locked.stage === 'cancelled') throw new AppException(409, 'conflict', `A ${locked.stage} move needs no permits`);
+      const move = await this.moves.get(moveId, undefined, m);
+      const assessment = await this.moves.assessmentOf(move, now, m);
+      return this.syncInTx(m, move, assessment, actor, now, 'from the assessment');
+    });
+    const rows = await this.rows(`p.move_id = $1 AND p.status <> 'void'`, [moveId], undefined, 'ORDER BY p.jurisdiction');
+    return { ...out, permits: rows.map((r) => toSummaryDto(r, now)) };
+  }
+
+  /**
+   * Makes the move's permits follow its assessment: a permit for every jurisdiction that needs one, estimates and
+   * lead times refreshed, filed or issued permits whose figures no longer cover the plan flagged for amendment,
+   * open permits no longer needed voided.
+   */
+  async syncInTx(m: EntityManager, move: Move, assessment: AssessmentDto, actor: SessionUser | null, now: Date, why: string): Promise<{ created: number; updated: number }> {
+    const live = await m.find(Permit, { where: { moveId: move.id, status: Not('void') }, lock: { mode: 'pessimistic_write' } });
+    const byCode = new Map(live.map((p) => [p.jurisdiction, p]));
+    const dates = travelDates(move.requestedDeparture, move.travelDays);
+    let created = 0;
+    let updated = 0;
+    for (const j of assessment.result.jurisdictions) {
+      const existing = byCode.get(j.code);
+      byCode.delete(j.code);
+      const estimate = j.fee ? cents(j.fee.totalUsd) : null;
+      const ruleVersion = assessment.ruleVersions[j.code] ?? null;
+      if (j.permitRequired && !existing) {
+        const roads = move.route.filter((s) => s.jurisdiction === j.code).map((s) => `${s.roads} (${s.miles} mi)`).join('; ');
+        const p = m.create(Permit, {
+          moveId: move.id,
+          jurisdiction: j.code,
+          permitType: j.superload.isSuperload ? 'superload' : 'single_trip',
+          status: 'to_file',
+          version: 1,
+          needed: true,
+          estimatedFeeCents: estimate,
+          refundable: j.fee?.refundable ?? null,
+          ruleVersion,
+          leadTimeDays: j.permit.leadTimeDays,
+          routeText: roads || null,
+          conditions: { escortsFront: j.escorts.front, escortsRear: j.escorts.rear, heightPole: j.escorts.heightPole },
+        });
+        const saved = await m.save(p);
+        await m.insert(PermitVersion, { permitId: saved.id, version: 1, status: 'to_file', snapshot: snapshotOf(saved), reason: why, createdById: actor?.id ?? null });
+        await this.audit.record(m, {
+          moveId: move.id, entity: 'permit', entityId: saved.id, action: 'created', actorId: actor?.id ?? null,
+          after: { jurisdiction: j.code, status: 'to_file', estimatedFeeCents: estimate, ruleVersion }, reason: why,
+        });
+        created++;
+        continue;
+      }
+      if (!existing) continue;
+      const next = m.create(Permit, { ...existing });
+      const reasons: string[] = [];
+      if (!j.permitRequired) {
+        next.needed = false;
+        if (existing.status === 'to_file' || existing.status === 'rejected') next.status = 'void';
+        else if (existing.status !== 'needs_amendment') reasons.push('the plan no longer needs a permit here; void it once the state agrees');
+      } else {
+        next.needed = true;
+      }
+      if (existing.status === 'to_file' || existing.status === 'rejected') {
+        next.estimatedFeeCents = estimate;
+        next.refundable = j.fee?.refundable ?? null;
+        next.ruleVersion = ruleVersion;
+      }
+      next.leadTimeDays = j.permit.leadTimeDays;
+      if (j.permitRequired && existing.permitted && (existing.status === 'filed' || existing.status === 'issued' || existing.status === 'needs_amendment')) {
+        reasons.push(...permittedDifferences(existing.permitted, factsFromAssessment(assessment, j.code, move.planRevision)));
+        if (existing.validFrom && existing.validTo && existing.status !== 'filed') {
+          const span = travelSpan(dates, zoneOf(j.code));
+          if (existing.validFrom > span.start || existing.validTo < span.end) reasons.push(`validity no longer covers the travel days ${dates[0]} to ${dates[dates.length - 1]}`);
+        }
+      }
+      if (reasons.length && existing.status !== 'void') {
+        next.status = 'needs_amendment';
+        next.amendmentReason = reasons.join('; ');
+      }
+      const before = snapshotOf(existing);
+      if (JSON.stringify(before) !== JSON.stringify(snapshotOf(next))) {
+        await this.saveChange(m, existing, next, actor, { action: next.status === 'needs_amendment' && existing.status !== 'needs_amendment' ? 'flagged_for_amendment' : next.status === 'void' ? 'voided' : 'synced', reason: reasons.length ? `${why}: ${reasons.join('; ')}` : why }, now);
+        updated++;
+      }
+    }
+    // jurisdictions no longer on the route at all
+    for (const existing of byCode.values()) {
+      const next = m.create(Permit, { ...existing, needed: false });
+      if (existing.status === 'to_file' || existing.status === 'rejected') next.status = 'void';
+      else if (existing.status !== 'needs_amendment') {
+        next.status = 'needs_amendment';
+        next.amendmentReason = `${existing.jurisdiction} is no longer on the route; void this permit once the state agrees`;
+      }
+      await this.saveChange(m, existing, next, actor, { action: next.status === 'void' ? 'voided' : 'flagged_for_amendment', reason: `${why}: no longer on the route` }, now);
+      updated++;
+    }
+    return { created, updated };
+  }
+
+  async update(id: string, dto: UpdatePermitDto, actor: SessionUser, now: Date): Promise<PermitDto> {
+    await this.ds.transaction(async (m) => {
+      const before = await m.findOne(Permit, { where: { id }, lock: { mode: 'pessimistic_write' } });
+      if (!before) throw new AppException(404, 'not_found', `No permit ${id}`);
+      if (before.version !== dto.version) {
+        throw new AppException(409, 'conflict', `This permit was changed by someone else (version ${before.version}, yours ${dto.version}); reload it`, { currentVersion: before.version });
+      }
+      if (before.status === 'void') throw new AppException(409, 'conflict', 'A void permit cannot be changed');
+      const tz = zoneOf(before.jurisdiction);
+      const next = m.create(Permit, { ...before });
+      if (dto.permitType !== undefined) next.permitType = dto.permitType;
+      if (dto.permitNumber !== undefined) next.permitNumber = dto.permitNumber?.trim() || null;
+      if (dto.issuedAt !== undefined) next.issuedAt = dto.issuedAt ? new Date(dto.issuedAt) : null;
+      if (dto.validFrom !== undefined) next.validFrom = dto.validFrom ? localToInstant(dto.validFrom, tz, 'validFrom') : null;
+      if (dto.validTo !== undefined) next.validTo = dto.validTo ? localToInstant(dto.validTo, tz, 'validTo') : null;
+      if (dto.routeText !== undefined) next.routeText = dto.routeText?.trim() || null;
+      if (dto.conditions !== undefined) next.conditions = JSON.parse(JSON.stringify(dto.conditions));
+      if (dto.conditionsText !== undefined) next.conditionsText = dto.conditionsText?.trim() || null;
+      if (dto.actualFeeUsd !== undefined) next.actualFeeCents = dto.actualFeeUsd === null ? null : cents(dto.actualFeeUsd);
+      if (dto.notes !== undefined) next.notes = dto.notes?.trim() || null;
+      if (dto.assigneeId !== undefined) {
+        if (dto.assigneeId) await this.checkAssignee(m, dto.assigneeId, 'assigneeId');
+        next.assigneeId = dto.assigneeId;
+      }
+      if (next.validFrom && next.validTo && next.validTo <= next.validFrom) throw fieldError('validTo', 'must be after validFrom');
+      if (dto.validFrom !== undefined || dto.validTo !== undefined) next.expiryWarning = null;
+      let action = 'updated';
+      if (dto.status && dto.status !== before.status) {
+        if (!canPermitTransition(before.status, dto.status)) {
+          throw new AppException(409, 'conflict', `A permit cannot go from ${PERMIT_STATUS_LABELS[before.status]} to ${PERMIT_STATUS_LABELS[dto.status]}`);
+        }
+        if ((dto.status === 'rejected' || dto.status === 'void' || dto.status === 'needs_amendment') && !dto.reason?.trim()) {
+          throw fieldError('reason', `say why the permit is ${PERMIT_STATUS_LABELS[dto.status].toLowerCase()}`);
+        }
+        next.status = dto.status;
+        action = dto.status;
+        if (dto.status === 'filed') {
+          // the figures the state is asked to permit: the plan as it stands now
+          const move = await this.moves.get(before.moveId, undefined, m);
+          const assessment = await this.moves.assessmentOf(move, now, m);
+          next.permitted = factsFromAssessment(assessment, before.jurisdiction, move.planRevision);
+          next.filedAt = now;
+          const j = assessment.result.jurisdictions.find((x) => x.code === before.jurisdiction);
+          if (j?.fee) next.estimatedFeeCents = cents(j.fee.totalUsd);
+        }
+        if (dto.status === 'issued') {
+          if (!next.permitNumber) throw fieldError('permitNumber', 'record the permit number the state issued');
+          if (!next.validFrom) throw fieldError('validFrom', 'record when the permit becomes valid');
+          if (!next.validTo) throw fieldError('validTo', 'record when the permit expires');
+          next.issuedAt = next.issuedAt ?? now;
+          next.amendmentReason = null;
+        }
+        if (dto.status === 'needs_amendment') next.amendmentReason = dto.reason!.trim();
+        if (dto.status === 'to_file') next.filedAt = null;
+      }
+      await this.saveChange(m, before, next, actor, { action, reason: dto.reason?.trim() ?? null }, now);
+    });
+    return this.get(id, actor, now);
+  }
+
+  /** Who permits can be assigned to: active permit clerks and admins. */
+  async assignees(): Promise<{ id: string; name: string; role: string }[]> {
+    const rows = await this.ds.manager.find(User, { where: { active: true, role: In(['permit_clerk', 'admin']) }, order: { name: 'ASC' } });
+    return rows.map((u) => ({ id: u.id, name: u.name, role: u.role }));
+  }
+
+  private async checkAssignee(m: EntityManager, userId: string, field: string): Promise<User> {
+    const u = await m.findOneBy(User, { id: userId });
+    if (!u || !u.active || (u.role !== 'permit_clerk' && u.role !== 'admin')) throw fieldError(field, 'no active permit clerk or admin with this id');
+    return u;
+  }
+
+  async assign(dto: AssignPermitsDto, actor: SessionUser, now: Date): Promise<AssignPermitsResponse> {
+    const ids = [...new Set(dto.permitIds)];
+    return this.ds.transaction(async (m) => {
+      if (dto.assigneeId) await this.checkAssignee(m, dto.assigneeId, 'assigneeId');
+      const list = await m.find(Permit, { where: { id: In(ids) }, order: { id: 'ASC' }, lock: { mode: 'pessimistic_write' } });
+      const found = new Set(list.map((p) => p.id));
+      const missing = ids.filter((i) => !found.has(i));
+      if (missing.length) throw fieldError('permitIds', `no permit ${missing.join(', ')}`);
+      let updated = 0;
+      for (const p of list) {
+        if (p.status === 'void' || p.assigneeId === dto.assigneeId) continue;
+        await this.saveChange(m, p, m.create(Permit, { ...p, assigneeId: dto.assigneeId }), actor, { action: 'assigned' }, now);
+        updated++;
+      }
+      return { updated };
+    });
+  }
+
+  // ---------------------------------------------------------------- the move's workflow
+
+  private async onPlanChanged(ctx: PlanChangeContext): Promise<void> {
+    const now = new Date();
+    const any = await ctx.manager.count(Permit, { where: { moveId: ctx.after.id, status: Not('void') } });
+    if (!any) return; // permits not created yet: nothing to follow
+    const assessment = await this.moves.assessmentOf(ctx.after, now, ctx.manager);
+    await this.syncInTx(ctx.manager, ctx.after, assessment, ctx.actor, now, `plan changed (${ctx.changed.join(', ')})`);
+  }
+
+  /**
+   * To receive permits: every jurisdiction that needs a permit has one that is issued, has its PDF, is paid, and
+   * whose validity covers the planned travel days. One line per missing thing. Before the move runs the permits it
+   * has are checked again (one flagged for amendment, unpaid or expired holds the move back).
+   */
+  async unmetConditions(ctx: TransitionContext, now = new Date()): Promise<UnmetCondition[]> {
+    if (ctx.to !== 'permits_received' && ctx.to !== 'running') return [];
+    const needed = ctx.assessment.result.summary.permitsNeeded;
+    if (!needed.length) return [];
+    const rows: (PermitRow & { paid_any: boolean })[] = await ctx.manager.query(
+      `SELECT q.*, EXISTS (SELECT 1 FROM permit_payments x WHERE x.permit_id = q.id AND x.status = 'succeeded') AS paid_any
+         FROM (${PERMIT_SUMMARY_SQL} WHERE p.move_id = $1 AND p.status <> 'void') q`,
+      [ctx.move.id],
+    );
+    const dates = travelDates(ctx.move.requestedDeparture, ctx.move.travelDays);
+    const out: UnmetCondition[] = [];
+    for (const code of needed) {
+      const p = rows.find((r) => r.jurisdiction === code);
+      const push = (c: string, message: string) => out.push({ code: c, jurisdiction: code, message: `${code} permit: ${message}` });
+      if (!p) {
+        // before the run, the permits were checked at permits_received; a move that got there another way is not
+        // held back here for permits that were never created
+        if (ctx.to === 'permits_received') push('permit_missing', 'not created yet (create permits from the assessment)');
+        continue;
+      }
+      if (p.status !== 'issued') push('permit_not_issued', `is ${PERMIT_STATUS_LABELS[p.status].toLowerCase()}, not issued${p.amendment_reason ? ` (${p.amendment_reason})` : ''}`);
+      if (p.document_count === 0) push('permit_pdf_missing', 'no permit PDF attached');
+      if (!p.paid_any) push('permit_unpaid', p.payment_status === 'processing' ? 'fee payment not confirmed yet' : 'fee not paid');
+      if (!p.valid_from || !p.valid_to) {
+        if (p.status === 'issued') push('permit_validity', 'no validity window recorded');
+      } else {
+        const tz = zoneOf(code);
+        const span = travelSpan(dates, tz);
+        const from = new Date(p.valid_from);
+        const to = new Date(p.valid_to);
+        if (from > span.start || to < span.end) {
+          push('permit_validity', `valid ${instantToLocal(from, tz).replace('T', ' ')} to ${instantToLocal(to, tz).replace('T', ' ')} (${tz}) does not cover the travel days ${dates[0]} to ${dates[dates.length - 1]}`);
+        } else if (ctx.to === 'running' && to <= now) push('permit_validity', 'has expired');
+      }
+    }
+    return out;
+  }
+}

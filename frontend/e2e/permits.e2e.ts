@@ -1,0 +1,170 @@
+import PDFDocument from 'pdfkit';
+import type { Browser, Locator, Page } from 'playwright-core';
+import { STEP_DECK_DEFAULTS, TRACTOR_DEFAULTS } from '../../seed/src/builders/fleet';
+import { mkdirSync } from 'node:fs';
+import { join } from 'node:path';
+import { ARTIFACTS, BASE_URL, launch, screenshot, signIn } from './support/browser';
+import { apiPost, apiToken } from './support/forms';
+
+const stamp = `${Date.now().toString(36)}${process.pid.toString(36)}`.toUpperCase();
+const day = (n: number) => new Date(Date.now() + n * 86_400_000).toISOString().slice(0, 10);
+const departure = day(12);
+
+function makePdf(): Promise<Buffer> {
+  return new Promise((resolve, reject) => {
+    const doc = new PDFDocument({ size: 'LETTER', margin: 50 });
+    const chunks: Buffer[] = [];
+    doc.on('data', (c: Buffer) => chunks.push(c));
+    doc.on('end', () => resolve(Buffer.concat(chunks)));
+    doc.on('error', reject);
+    doc.fontSize(16).text(`Texas single-trip permit TX-${stamp}`);
+    doc.fontSize(10).text('Issued for an invented test move.');
+    doc.end();
+  });
+}
+
+/** A viewport-sized shot (the move page is very long; a full-page shot of it is slow and unreadable). */
+const shot = async (page: Page, name: string) => {
+  mkdirSync(ARTIFACTS, { recursive: true });
+  await page.screenshot({ path: join(ARTIFACTS, `${name}.png`) });
+};
+
+/** Waits until the permit drawer's title shows this status. */
+async function statusIs(page: Page, label: string): Promise<void> {
+  await page.getByTestId('permit-drawer-title').getByTestId('permit-status').filter({ hasText: label }).waitFor({ timeout: 15000 });
+}
+
+describe('the permit desk in the browser', () => {
+  let browser: Browser;
+  let moveId = '';
+  let moveRef = '';
+
+  beforeAll(async () => {
+    browser = await launch();
+    const admin = await apiToken('admin@amberline.example');
+    const tractor = await apiPost<{ id: string }>(admin, '/fleet/tractors', { ...TRACTOR_DEFAULTS, unitNumber: `E2E-PT${stamp}`, plate: `P${stamp.slice(-6)}` });
+    const trailer = await apiPost<{ id: string }>(admin, '/fleet/trailers', { ...STEP_DECK_DEFAULTS, unitNumber: `E2E-PS${stamp}` });
+    const dispatcher = await apiToken('dispatcher@amberline.example');
+    // 15 ft wide excavator: a Texas width permit (23 CFR 658.15: cargo counts toward width)
+    const move = await apiPost<{ id: string; reference: string }>(dispatcher, '/moves', {
+      customer: `Copperfield Earthworks ${stamp}`,
+      commodity: 'Tracked excavator',
+      articles: [
+        {
+          id: 'A1', description: 'Tracked excavator, boom folded', lengthIn: 384, widthIn: 180, heightIn: 126, weightLb: 62_000, weightSource: 'spec_sheet',
+          positionFromTrailerFrontIn: 150, lateralOffsetIn: 0, dunnageIn: 0, blockedForward: false, heavyEquipment: true, sharpEdges: true,
+          tiedowns: [1, 2, 3, 4].map((n) => ({ label: `chain ${n}`, kind: 'chain', chainSize: '1/2', chainGrade: 70, anchorKind: 'winch_track', path: 'direct', edgeProtection: true })),
+        },
+      ],
+      tractorId: tractor.id,
+      trailerId: trailer.id,
+      sliderSettingFt: 39,
+      route: [{ order: 1, jurisdiction: 'TX', roads: 'US 290, I-10 W', miles: 200, roadType: 'interstate', zip: '78624' }],
+      origin: 'Cypress, TX',
+      destination: 'Fredericksburg, TX',
+      requestedDeparture: departure,
+      travelDays: 1,
+    });
+    moveId = move.id;
+    moveRef = move.reference;
+  });
+  afterAll(() => browser?.close());
+
+  it('a clerk takes a permit from to file to issued with its PDF and a payment (after a plain decline); the move can then advance', async () => {
+    const page: Page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
+    const consoleErrors: string[] = [];
+    page.on('console', (m) => {
+      // antd deprecation warnings count too; the move page's plan results still use antd List (not part of the permit screens)
+      if (/\[antd: List\]/.test(m.text())) return;
+      if (m.type() === 'error' || (m.type() === 'warning' && /deprecated/i.test(m.text()))) consoleErrors.push(m.text());
+    });
+    await signIn(page, 'clerk@amberline.example');
+    await page.getByTestId('current-role').waitFor();
+    page.setDefaultTimeout(15000);
+    try {
+      await clerkFlow(page);
+    } catch (e) {
+      await screenshot(page, 'permits-failure');
+      throw e;
+    }
+    expect(consoleErrors).toEqual([]);
+    await page.close();
+  }, 120_000);
+
+  /** The move page, once its assessment has loaded (it is long: a click before then can land on shifting content). */
+  async function openMovePage(page: Page): Promise<void> {
+    await page.goto(`${BASE_URL}/moves/${moveId}`);
+    await page.getByTestId('move-permits').waitFor();
+    await page.waitForLoadState('networkidle');
+  }
+
+  async function clerkFlow(page: Page): Promise<void> {
+    // the move page: create the permits from the assessment
+    await openMovePage(page);
+    await page.getByTestId('permits-sync').click();
+    await page.getByTestId('open-permit-TX').waitFor();
+    await page.getByTestId('move-permits').getByTestId('permit-status').filter({ hasText: 'To file' }).waitFor();
+    await page.getByTestId('move-permits').evaluate((e) => e.scrollIntoView({ block: 'center' }));
+    await shot(page, 'permits-1-move-page');
+
+    // the desk shows counters, the lists and the queue
+    await page.goto(`${BASE_URL}/permits`);
+    await page.getByTestId('permit-counters').waitFor();
+    await page.getByRole('columnheader', { name: 'Urgency' }).waitFor();
+    await screenshot(page, 'permits-2-desk');
+
+    // back on the move, open the Texas permit and record the filing
+    await openMovePage(page);
+    await page.getByTestId('open-permit-TX').click();
+    const drawer: Locator = page.getByTestId('permit-details');
+    await drawer.waitFor();
+    await statusIs(page, 'To file');
+    await drawer.getByTestId('permit-to-filed').click();
+    await statusIs(page, 'Filed');
+
+    // the state issued it: number, validity (Texas time), fee
+    await drawer.getByLabel('Permit number').fill(`TX-${stamp}`);
+    await drawer.getByLabel('Valid from').fill(`${day(11)}T00:00`);
+    await drawer.getByLabel('Valid to').fill(`${day(15)}T23:59`);
+    await drawer.getByLabel('Max speed (mph)').fill('45');
+    await drawer.getByLabel('Actual fee (USD)').fill('185.00');
+    await drawer.getByTestId('permit-to-issued').click();
+    await statusIs(page, 'Issued');
+
+    // the PDF, with upload progress
+    await drawer.locator('input[type=file]').setInputFiles({ name: `TX permit ${stamp}.pdf`, mimeType: 'application/pdf', buffer: await makePdf() });
+    await drawer.getByTestId('permit-documents').getByText(`TX permit ${stamp}.pdf`).waitFor({ timeout: 15000 });
+
+    // a declined test card is said plainly
+    await drawer.getByTestId('test-card').getByText('Test card — declined').click();
+    await drawer.getByTestId('permit-pay').click();
+    await drawer.getByTestId('payment-declined').waitFor();
+    expect(await drawer.getByTestId('payment-declined').textContent()).toContain('Your card was declined.');
+    await drawer.getByTestId('permit-payment').scrollIntoViewIfNeeded();
+    await shot(page, 'permits-3-declined');
+
+    // then the Visa test card; the processor's signed event marks it paid
+    await drawer.getByTestId('test-card').getByText('Test Visa — succeeds').click();
+    await drawer.getByTestId('permit-pay').click();
+    await drawer.getByTestId('permit-payment').locator('[data-testid="payment-status"]').filter({ hasText: 'Paid' }).first().waitFor({ timeout: 20000 });
+    await shot(page, 'permits-4-issued-paid');
+    await page.keyboard.press('Escape');
+
+    // the move page lists the permit as issued and paid, with its PDF
+    await page.getByTestId('move-permits').getByTestId('permit-status').filter({ hasText: 'Issued' }).waitFor();
+    await page.getByTestId('move-permits').getByTestId('payment-status').filter({ hasText: 'Paid' }).waitFor();
+
+    // the dispatcher can now advance the move
+    const dispatcher = await apiToken('dispatcher@amberline.example');
+    const res = await fetch(`${BASE_URL}/api/moves/${moveId}/stage`, {
+      method: 'POST', headers: { 'content-type': 'application/json', authorization: `Bearer ${dispatcher}` }, body: JSON.stringify({ to: 'permits_received' }),
+    });
+    const body = await res.json();
+    expect({ status: res.status, stage: body.stage }).toEqual({ status: 201, stage: 'permits_received' });
+
+    // the ledger shows both attempts for this move
+    await page.goto(`${BASE_URL}/payments`);
+    await page.getByRole('link', { name: moveRef }).first().waitFor();
+    await screenshot(page, 'permits-5-payments');
+  }
+});

@@ -1,0 +1,423 @@
+import { useEffect, useMemo, useState } from 'react';
+import {
+  Alert, App, Button, Col, Descriptions, Divider, Drawer, Form, Input, InputNumber, Modal, Progress, Radio, Row, Select, Space, Spin, Switch, Table, Timeline, Typography, Upload,
+} from 'antd';
+import { Link } from 'react-router-dom';
+import {
+  formatFeetInches, formatPounds, PERMIT_STATUS_LABELS, PERMIT_TRANSITIONS, PERMIT_TYPE_LABELS, PERMIT_TYPES, TEST_PAYMENT_METHODS,
+  type PaymentDto, type PermitDto, type PermitStatus, type PermitType, type UpdatePermitRequest,
+} from '@amberline/common';
+import { Caution } from '../../../components/caution';
+import { to } from '../../../config/paths';
+import { ApiError } from '../../../lib/api-client';
+import { accessFor } from '../../../lib/access';
+import { useAuth } from '../../../lib/auth';
+import { downloadPermitDocument } from '../api/download-file';
+import { useAssignees } from '../api/get-assignees';
+import { usePermit } from '../api/get-permit';
+import { newAttemptKey, usePayPermit } from '../api/pay-permit';
+import { useRefundPermit } from '../api/refund-permit';
+import { useUpdatePermit } from '../api/update-permit';
+import { useUploadPermitDocument } from '../api/upload-permit-document';
+import { localText, PaymentTag, PermitStatusTag, usd } from './permit-tags';
+
+type FormValues = {
+  permitType: PermitType;
+  permitNumber?: string;
+  validFrom?: string;
+  validTo?: string;
+  routeText?: string;
+  conditionsText?: string;
+  actualFeeUsd?: number | null;
+  assigneeId?: string | null;
+  notes?: string;
+  escortsFront?: number;
+  escortsRear?: number;
+  heightPole?: boolean;
+  travelHours?: string;
+  holidays?: string;
+  maxSpeedMph?: number;
+  utilityContacts?: string[];
+};
+
+const ACTION_LABELS: Partial<Record<PermitStatus, string>> = {
+  filed: 'Record filing',
+  issued: 'Record issue',
+  rejected: 'Record rejection',
+  to_file: 'Back to “to file”',
+  needs_amendment: 'Flag for amendment',
+  void: 'Void',
+};
+const NEEDS_REASON: PermitStatus[] = ['rejected', 'void', 'needs_amendment'];
+
+function toForm(p: PermitDto): FormValues {
+  return {
+    permitType: p.permitType,
+    permitNumber: p.permitNumber ?? undefined,
+    validFrom: p.validFromLocal ?? undefined,
+    validTo: p.validToLocal ?? undefined,
+    routeText: p.routeText ?? undefined,
+    conditionsText: p.conditionsText ?? undefined,
+    actualFeeUsd: p.actualFeeUsd,
+    assigneeId: p.assignee?.id ?? null,
+    notes: p.notes ?? undefined,
+    ...p.conditions,
+  };
+}
+
+function toRequest(v: FormValues, version: number): UpdatePermitRequest {
+  const conditions = {
+    ...(v.escortsFront !== undefined && v.escortsFront !== null ? { escortsFront: v.escortsFront } : {}),
+    ...(v.escortsRear !== undefined && v.escortsRear !== null ? { escortsRear: v.escortsRear } : {}),
+    ...(v.heightPole !== undefined ? { heightPole: v.heightPole } : {}),
+    ...(v.travelHours ? { travelHours: v.travelHours } : {}),
+    ...(v.holidays ? { holidays: v.holidays } : {}),
+    ...(v.maxSpeedMph ? { maxSpeedMph: v.maxSpeedMph } : {}),
+    ...(v.utilityContacts?.length ? { utilityContacts: v.utilityContacts } : {}),
+  };
+  return {
+    version,
+    permitType: v.permitType,
+    permitNumber: v.permitNumber?.trim() || null,
+    validFrom: v.validFrom || null,
+    validTo: v.validTo || null,
+    routeText: v.routeText?.trim() || null,
+    conditionsText: v.conditionsText?.trim() || null,
+    actualFeeUsd: v.actualFeeUsd ?? null,
+    assigneeId: v.assigneeId ?? null,
+    notes: v.notes?.trim() || null,
+    conditions,
+  };
+}
+
+/** The permit form: filing, issue (number, validity, conditions, fee), PDFs with upload progress, the fee payment. */
+export function PermitDrawer({ permitId, onClose }: { permitId: string | null; onClose: () => void }) {
+  const { user } = useAuth();
+  const canWork = accessFor(user?.role).canWorkPermits;
+  const permit = usePermit(permitId ?? undefined);
+  const p = permit.data;
+  return (
+    <Drawer
+      open={!!permitId}
+      onClose={onClose}
+      size={720}
+      destroyOnHidden
+      title={p ? <Space data-testid="permit-drawer-title">{`${p.jurisdictionName} permit`}<PermitStatusTag status={p.status} /></Space> : 'Permit'}
+    >
+      {permit.isPending && <Spin />}
+      {permit.isError && <Alert type="error" showIcon title={permit.error.message} />}
+      {p && <PermitDetails p={p} canWork={canWork} />}
+    </Drawer>
+  );
+}
+
+function PermitDetails({ p, canWork }: { p: PermitDto; canWork: boolean }) {
+  const { message } = App.useApp();
+  const [form] = Form.useForm<FormValues>();
+  const update = useUpdatePermit();
+  const assignees = useAssignees(canWork);
+  const [reasonFor, setReasonFor] = useState<PermitStatus | null>(null);
+  const [reason, setReason] = useState('');
+  const locked = !canWork || p.status === 'void';
+
+  useEffect(() => {
+    form.setFieldsValue(toForm(p));
+  }, [p, form]);
+
+  const save = async (status?: PermitStatus, why?: string) => {
+    let values: FormValues;
+    try {
+      values = await form.validateFields();
+    } catch {
+      return;
+    }
+    const body = { ...toRequest(values, p.version), ...(status ? { status } : {}), ...(why ? { reason: why } : {}) };
+    update.mutate(
+      { id: p.id, ...body },
+      {
+        onSuccess: (r) => {
+          message.success(status ? `${r.jurisdiction} permit: ${PERMIT_STATUS_LABELS[r.status].toLowerCase()}` : 'Permit saved');
+          setReasonFor(null);
+          setReason('');
+        },
+        onError: (e) => {
+          if (e instanceof ApiError && e.fieldErrors().length) {
+            const known = new Set(Object.keys(toForm(p)).concat(['escortsFront', 'maxSpeedMph', 'utilityContacts']));
+            const fe = e.fieldErrors().map((f) => ({ ...f, name: f.name.replace(/^conditions\./, '') }));
+            form.setFields(fe.filter((f) => known.has(f.name)) as Parameters<typeof form.setFields>[0]);
+            if (fe.some((f) => !known.has(f.name))) message.error(e.message);
+          } else message.error(e.message);
+        },
+      },
+    );
+  };
+
+  const next = PERMIT_TRANSITIONS[p.status];
+
+  return (
+    <div data-testid="permit-details">
+      <Descriptions size="small" column={2} style={{ marginBottom: 12 }}>
+        <Descriptions.Item label="Move"><Link to={to.move(p.moveId)}>{p.moveReference}</Link> · {p.customer}</Descriptions.Item>
+        <Descriptions.Item label="Departs">{p.departure}</Descriptions.Item>
+        <Descriptions.Item label="File by">{p.fileBy} ({p.leadTimeDays} d lead time)</Descriptions.Item>
+        <Descriptions.Item label="Times in">{p.timeZone}</Descriptions.Item>
+        <Descriptions.Item label="Estimated fee">{usd(p.estimatedFeeUsd)} (rulebook{p.ruleVersion ? ` v${p.ruleVersion}` : ''})</Descriptions.Item>
+        <Descriptions.Item label="Refundable">{p.refundable === null ? 'rule does not say' : p.refundable ? 'yes' : 'no'}</Descriptions.Item>
+        {p.filedAt && <Descriptions.Item label="Filed">{new Date(p.filedAt).toLocaleString()}</Descriptions.Item>}
+        {p.issuedAt && <Descriptions.Item label="Issued">{new Date(p.issuedAt).toLocaleString()}</Descriptions.Item>}
+      </Descriptions>
+      {p.amendmentReason && <Alert type="warning" showIcon title="Needs amendment" description={p.amendmentReason} style={{ marginBottom: 12 }} data-testid="amendment-reason" />}
+      {p.expiryWarning && <Alert type="error" showIcon title={`Validity: ${p.expiryWarning}`} style={{ marginBottom: 12 }} />}
+      {!p.needed && <Alert type="info" showIcon title="The current plan does not need this permit." style={{ marginBottom: 12 }} />}
+      <Caution kind="rulebook" />
+
+      {canWork && p.status !== 'void' && (
+        <Space wrap style={{ marginBottom: 12 }} data-testid="permit-actions">
+          {next.map((s) => (
+            <Button
+              key={s}
+              type={s === 'filed' || s === 'issued' ? 'primary' : 'default'}
+              danger={s === 'void' || s === 'rejected'}
+              loading={update.isPending && update.variables?.status === s}
+              onClick={() => (NEEDS_REASON.includes(s) ? setReasonFor(s) : save(s))}
+              data-testid={`permit-to-${s}`}
+            >
+              {ACTION_LABELS[s] ?? PERMIT_STATUS_LABELS[s]}
+            </Button>
+          ))}
+        </Space>
+      )}
+
+      <Form form={form} layout="vertical" disabled={locked} initialValues={toForm(p)} onFinish={() => save()}>
+        <Row gutter={12}>
+          <Col span={8}>
+            <Form.Item name="permitType" label="Permit type">
+              <Select options={PERMIT_TYPES.map((t) => ({ value: t, label: PERMIT_TYPE_LABELS[t] }))} />
+            </Form.Item>
+          </Col>
+          <Col span={8}>
+            <Form.Item name="permitNumber" label="Permit number" rules={[{ max: 60 }]}>
+              <Input placeholder="as printed on the permit" />
+            </Form.Item>
+          </Col>
+          <Col span={8}>
+            <Form.Item name="actualFeeUsd" label="Actual fee (USD)">
+              <InputNumber min={0.5} max={100000} precision={2} prefix="$" style={{ width: '100%' }} />
+            </Form.Item>
+          </Col>
+        </Row>
+        <Row gutter={12}>
+          <Col span={12}>
+            <Form.Item name="validFrom" label={`Valid from (${p.timeZone})`}>
+              <Input type="datetime-local" aria-label="Valid from" />
+            </Form.Item>
+          </Col>
+          <Col span={12}>
+            <Form.Item name="validTo" label={`Valid to (${p.timeZone})`}>
+              <Input type="datetime-local" aria-label="Valid to" />
+            </Form.Item>
+          </Col>
+        </Row>
+        <Form.Item name="routeText" label="Route as permitted"><Input.TextArea rows={2} maxLength={2000} /></Form.Item>
+        <Typography.Text strong>Conditions</Typography.Text>
+        <Row gutter={12} style={{ marginTop: 8 }}>
+          <Col span={6}><Form.Item name="escortsFront" label="Escorts front"><InputNumber min={0} max={6} style={{ width: '100%' }} /></Form.Item></Col>
+          <Col span={6}><Form.Item name="escortsRear" label="Escorts rear"><InputNumber min={0} max={6} style={{ width: '100%' }} /></Form.Item></Col>
+          <Col span={6}><Form.Item name="heightPole" label="Height pole" valuePropName="checked"><Switch /></Form.Item></Col>
+          <Col span={6}><Form.Item name="maxSpeedMph" label="Max speed (mph)"><InputNumber min={5} max={80} style={{ width: '100%' }} /></Form.Item></Col>
+        </Row>
+        <Row gutter={12}>
+          <Col span={12}><Form.Item name="travelHours" label="Travel hours"><Input maxLength={200} placeholder="e.g. 30 min before sunrise to 30 min after sunset" /></Form.Item></Col>
+          <Col span={12}><Form.Item name="holidays" label="Holidays"><Input maxLength={200} placeholder="e.g. no travel from noon the weekday before" /></Form.Item></Col>
+        </Row>
+        <Form.Item name="utilityContacts" label="Utility contacts"><Select mode="tags" tokenSeparators={[';']} placeholder="name and phone; press Enter after each" /></Form.Item>
+        <Form.Item name="conditionsText" label="Other conditions"><Input.TextArea rows={2} maxLength={4000} /></Form.Item>
+        <Row gutter={12}>
+          <Col span={12}>
+            <Form.Item name="assigneeId" label="Assignee">
+              <Select allowClear showSearch optionFilterProp="label" loading={assignees.isPending} options={(assignees.data ?? []).map((a) => ({ value: a.id, label: a.name }))} />
+            </Form.Item>
+          </Col>
+          <Col span={12}><Form.Item name="notes" label="Notes"><Input.TextArea rows={1} maxLength={4000} /></Form.Item></Col>
+        </Row>
+        {!locked && <Button htmlType="submit" loading={update.isPending && !update.variables?.status} data-testid="permit-save">Save</Button>}
+      </Form>
+
+      {p.permitted && (
+        <>
+          <Divider titlePlacement="start">As permitted (plan revision {p.permitted.planRevision})</Divider>
+          <Descriptions size="small" column={3}>
+            <Descriptions.Item label="Width">{formatFeetInches(p.permitted.widthIn)}</Descriptions.Item>
+            <Descriptions.Item label="Height">{formatFeetInches(p.permitted.heightIn)}</Descriptions.Item>
+            <Descriptions.Item label="Length">{formatFeetInches(p.permitted.lengthIn)}</Descriptions.Item>
+            <Descriptions.Item label="Gross">{formatPounds(p.permitted.grossLb)}</Descriptions.Item>
+            <Descriptions.Item label="Trailer axles">{formatPounds(p.permitted.trailerLb)}</Descriptions.Item>
+            <Descriptions.Item label="Miles here">{p.permitted.miles}</Descriptions.Item>
+          </Descriptions>
+        </>
+      )}
+
+      <Divider titlePlacement="start">Permit PDF</Divider>
+      <PermitDocuments p={p} canWork={canWork && p.status !== 'void'} />
+
+      <Divider titlePlacement="start">Fee</Divider>
+      <PermitPayment p={p} canWork={canWork} />
+
+      <Divider titlePlacement="start">History</Divider>
+      <Timeline
+        items={p.history.map((h) => ({
+          key: h.version,
+          content: (
+            <span>
+              <strong>v{h.version}</strong> {PERMIT_STATUS_LABELS[h.status]} · {new Date(h.createdAt).toLocaleString()} {h.createdBy ? `· ${h.createdBy.name}` : '· system'}
+              {h.reason ? <div><Typography.Text type="secondary">{h.reason}</Typography.Text></div> : null}
+            </span>
+          ),
+        }))}
+      />
+
+      <Modal
+        open={!!reasonFor}
+        title={reasonFor ? `${ACTION_LABELS[reasonFor]}: why?` : ''}
+        okText={reasonFor ? ACTION_LABELS[reasonFor] : 'OK'}
+        okButtonProps={{ disabled: !reason.trim(), danger: reasonFor === 'void' || reasonFor === 'rejected', loading: update.isPending }}
+        onOk={() => reasonFor && save(reasonFor, reason.trim())}
+        onCancel={() => setReasonFor(null)}
+        destroyOnHidden
+      >
+        <Input.TextArea rows={3} value={reason} onChange={(e) => setReason(e.target.value)} maxLength={500} aria-label="Reason" />
+      </Modal>
+    </div>
+  );
+}
+
+function PermitDocuments({ p, canWork }: { p: PermitDto; canWork: boolean }) {
+  const { message } = App.useApp();
+  const upload = useUploadPermitDocument();
+  const [progress, setProgress] = useState<number | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  return (
+    <div data-testid="permit-documents">
+      {canWork && (
+        <Upload
+          accept="application/pdf,.pdf"
+          showUploadList={false}
+          customRequest={({ file }) => {
+            setError(null);
+            setProgress(0);
+            upload.mutate(
+              { permitId: p.id, file: file as File, onProgress: setProgress },
+              {
+                onSuccess: (d) => {
+                  setProgress(null);
+                  message.success(`${d.fileName} attached as version ${d.version}`);
+                },
+                onError: (e) => {
+                  setProgress(null);
+                  setError(e.message);
+                },
+              },
+            );
+          }}
+        >
+          <Button loading={upload.isPending} data-testid="permit-upload">Attach permit PDF</Button>
+        </Upload>
+      )}
+      {progress !== null && <Progress percent={progress} size="small" data-testid="upload-progress" />}
+      {error && <Alert type="error" showIcon title={error} style={{ marginTop: 8 }} data-testid="upload-error" />}
+      <Table
+        size="small"
+        rowKey="id"
+        style={{ marginTop: 8 }}
+        pagination={false}
+        dataSource={p.documents}
+        locale={{ emptyText: 'No PDF yet' }}
+        columns={[
+          { title: 'Version', dataIndex: 'version', width: 70 },
+          { title: 'File', dataIndex: 'fileName', render: (name: string, d) => <Button type="link" size="small" onClick={() => downloadPermitDocument(p.id, d.id, name).catch((e: Error) => message.error(e.message))}>{name}</Button> },
+          { title: 'Size', dataIndex: 'sizeBytes', render: (b: number) => `${(b / 1024).toFixed(1)} KB` },
+          { title: 'Uploaded', dataIndex: 'uploadedAt', render: (v: string, d) => `${new Date(v).toLocaleString()}${d.uploadedBy ? ` · ${d.uploadedBy.name}` : ''}` },
+        ]}
+      />
+    </div>
+  );
+}
+
+function PermitPayment({ p, canWork }: { p: PermitDto; canWork: boolean }) {
+  const { message } = App.useApp();
+  const pay = usePayPermit();
+  const refund = useRefundPermit();
+  const [method, setMethod] = useState(TEST_PAYMENT_METHODS[0].id);
+  const [attemptKey, setAttemptKey] = useState(newAttemptKey);
+  const [last, setLast] = useState<PaymentDto | null>(null);
+  const paid = p.payments.find((x) => x.status === 'succeeded');
+  const inFlight = p.payments.find((x) => x.status === 'processing' || x.status === 'pending');
+  const latest = useMemo(() => last ?? p.payments[0] ?? null, [last, p.payments]);
+  const canPay = canWork && p.status === 'issued' && !paid && !inFlight;
+
+  const submit = () =>
+    pay.mutate(
+      { permitId: p.id, paymentMethod: method, idempotencyKey: attemptKey },
+      {
+        onSuccess: (r) => {
+          setLast(r);
+          setAttemptKey(newAttemptKey()); // the next attempt is a new one
+          if (r.status === 'declined' || r.status === 'failed') message.error(`Payment declined: ${r.failureMessage ?? r.declineCode}`);
+          else message.success(`Payment of ${usd(r.amountUsd)} accepted; waiting for the processor's confirmation`);
+        },
+        onError: (e) => message.error(e.message),
+      },
+    );
+
+  return (
+    <div data-testid="permit-payment">
+      <Space wrap style={{ marginBottom: 8 }}>
+        <span>Actual fee: <strong>{usd(p.actualFeeUsd)}</strong></span>
+        <PaymentTag status={p.paymentStatus} />
+      </Space>
+      {latest && (latest.status === 'declined' || latest.status === 'failed') && !paid && (
+        <Alert type="error" showIcon title="The card was declined" description={latest.failureMessage ?? latest.declineCode} style={{ marginBottom: 8 }} data-testid="payment-declined" />
+      )}
+      {p.status !== 'issued' && !paid && <Typography.Paragraph type="secondary">The fee is paid once the permit is issued.</Typography.Paragraph>}
+      {canPay && (
+        <div style={{ marginBottom: 8 }}>
+          <Typography.Paragraph type="secondary" style={{ marginBottom: 4 }}>Test mode: choose a test card (no real card is charged).</Typography.Paragraph>
+          <Radio.Group value={method} onChange={(e) => setMethod(e.target.value)} options={TEST_PAYMENT_METHODS.map((m) => ({ value: m.id, label: m.label }))} data-testid="test-card" />
+          <div style={{ marginTop: 8 }}>
+            <Button type="primary" onClick={submit} loading={pay.isPending} disabled={!p.actualFeeUsd} data-testid="permit-pay">
+              Pay {usd(p.actualFeeUsd)}
+            </Button>
+            {!p.actualFeeUsd && <Typography.Text type="secondary" style={{ marginLeft: 8 }}>Record the actual fee first.</Typography.Text>}
+          </div>
+        </div>
+      )}
+      {canWork && p.status === 'void' && paid && p.refundable && (
+        <Button
+          onClick={() => refund.mutate({ permitId: p.id, reason: 'permit voided' }, { onSuccess: () => message.success('Fee refunded'), onError: (e) => message.error(e.message) })}
+          loading={refund.isPending}
+          data-testid="permit-refund"
+        >
+          Refund {usd(paid.amountUsd)}
+        </Button>
+      )}
+      <Table
+        size="small"
+        rowKey="id"
+        pagination={false}
+        dataSource={p.payments}
+        locale={{ emptyText: 'No payment yet' }}
+        columns={[
+          { title: 'Attempt', dataIndex: 'attempt', width: 70 },
+          { title: 'Amount', dataIndex: 'amountUsd', render: (v: number) => usd(v) },
+          { title: 'Status', dataIndex: 'status', render: (s: PaymentDto['status']) => <PaymentTag status={s} /> },
+          { title: 'Card', dataIndex: 'paymentMethod' },
+          { title: 'When', dataIndex: 'createdAt', render: (v: string) => new Date(v).toLocaleString() },
+          { title: 'Processor id', dataIndex: 'stripePaymentIntentId', render: (v: string | null) => <Typography.Text code>{v ?? '—'}</Typography.Text> },
+        ]}
+      />
+      <Typography.Paragraph type="secondary" style={{ marginTop: 8 }}>
+        Validity: {localText(p.validFromLocal)} to {localText(p.validToLocal)} ({p.timeZone})
+      </Typography.Paragraph>
+    </div>
+  );
+}
