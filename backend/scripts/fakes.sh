@@ -1,7 +1,6 @@
 # Local stand-ins for outside services, started on loopback by start.sh and test.sh.
 # Sourced: defines start_fakes, which appends the PIDs it starts to PIDS and exports their addresses.
 start_fakes() {
-  : # payment and mail fakes are added here by the permit and escort work
   start_stripe_fake
   start_mail_catcher
 }
@@ -13,8 +12,9 @@ start_mail_catcher() {
   if [ "${NODE_ENV:-}" = test ]; then
     export SMTP_PORT="${SMTP_PORT:-1125}"; web="${MAILDEV_WEB_PORT:-1180}"
     export APP_URL="${APP_URL:-http://127.0.0.1:${E2E_PORT:-3100}}"
-    # test processes leave the outbox to the test that owns it; the browser-test server sends every second
-    export MAIL_SEND_INTERVAL_MS="${MAIL_SEND_INTERVAL_MS:-1000}"
+    # test processes leave the outbox to the test that owns it; the browser-test server (started by the
+    # browser tests' global setup, which passes this on as MAIL_SEND_INTERVAL_MS) sends every second
+    export E2E_MAIL_SEND_INTERVAL_MS="${E2E_MAIL_SEND_INTERVAL_MS:-1000}"
     dir="$(mktemp -d /tmp/amberline-maildev-test.XXXXXX)"
   else
     export SMTP_PORT="${SMTP_PORT:-1025}"; web="${MAILDEV_WEB_PORT:-1080}"

@@ -20,7 +20,7 @@ export default async function globalSetup(): Promise<void> {
     await db.close();
   }
   const server = spawn(process.execPath, [join(ROOT, 'backend/dist/main.js')], {
-    env: { ...process.env, PORT: String(E2E_PORT), HOST: '127.0.0.1', NODE_ENV: 'test', NODE_OPTIONS: '' },
+    env: { ...process.env, PORT: String(E2E_PORT), HOST: '127.0.0.1', NODE_ENV: 'test', NODE_OPTIONS: '', MAIL_SEND_INTERVAL_MS: process.env.E2E_MAIL_SEND_INTERVAL_MS ?? '1000' },
     stdio: ['ignore', 'ignore', 'inherit'],
   });
   (globalThis as { __amberlineServer?: typeof server }).__amberlineServer = server;

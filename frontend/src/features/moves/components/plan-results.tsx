@@ -1,5 +1,5 @@
 /** The engine's plan-check results in plain words: dimensions, the federal legal check, securement, totals. */
-import { Alert, Descriptions, List, Space, Table, Tag, Typography } from 'antd';
+import { Alert, Descriptions, Space, Table, Tag, Typography } from 'antd';
 import {
   formatFeetInches,
   formatPounds,
@@ -72,18 +72,16 @@ export function FederalCheck({ check: f }: { check: AxleCheckResult }) {
       {bridge.length > 0 && (
         <div data-testid="bridge-findings" style={{ marginBottom: 8 }}>
           <Typography.Text strong>Bridge formula</Typography.Text>
-          <List
-            size="small"
-            dataSource={bridge}
-            renderItem={(v) => (
-              <List.Item data-testid="bridge-finding">
+          <ul style={{ margin: '4px 0', paddingLeft: 0, listStyle: 'none' }}>
+            {bridge.map((v, i) => (
+              <li key={i} data-testid="bridge-finding" style={{ padding: '6px 0', borderBottom: '1px solid #f1f5f9' }}>
                 <Space orientation="vertical" size={0}>
                   <span>{v.message}</span>
                   <CitedSource text={v.source} />
                 </Space>
-              </List.Item>
-            )}
-          />
+              </li>
+            ))}
+          </ul>
         </div>
       )}
       {f.violations.filter((v) => v.rule !== 'bridge-formula').length > 0 && (
