@@ -1,6 +1,6 @@
 import type { MoveDto, PermitDto, PermitSummaryDto, Role } from '@amberline/common';
 import { seedTractor, seedTrailer, seedUser } from '@amberline/seed';
-import { seedPermit } from '../../seed/src/builders/permit';
+import { seedPermit } from '@amberline/seed';
 import { ExpiryScanService } from '../src/permits/expiry-scan.service';
 import { daysFromNow, texasMove, wideExcavator } from './fixtures/moves';
 import { texasNewMexicoMove, validity } from './fixtures/permits';
@@ -296,6 +296,10 @@ describe('/api/permits', () => {
       expect(await warn(shortOne.id)).toMatch(/before the planned exit at the end of/);
       expect(await warn(longOne.id)).toBeNull();
       expect(first.flagged.map((f) => f.permitId)).toContain(shortOne.id);
+      // the warning is e-mailed through the outbox, written in the scan's transaction, to the clerks and the dispatcher
+      const mails = await t.ds.query(`SELECT to_addresses, subject FROM mail_outbox WHERE related_entity = 'permit' AND related_id = $1`, [shortOne.id]);
+      expect(mails).toHaveLength(1);
+      expect(mails[0].subject).toMatch(/Permit warning: .* TX .*before the planned exit/);
 
       // two days later on the clock, the long permit is within 48 hours of its end
       const later = new Date(Date.now() + 3.5 * 86_400_000);

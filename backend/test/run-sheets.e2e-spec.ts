@@ -1,7 +1,7 @@
 import { execFileSync } from 'node:child_process';
 import type { Role } from '@amberline/common';
-import { seedTractor, seedTrailer } from '@amberline/seed';
-import { texasMove } from './fixtures/moves';
+import { seedPermit, seedTractor, seedTrailer } from '@amberline/seed';
+import { daysFromNow, texasMove } from './fixtures/moves';
 import { createTestApp, type TestApp } from './utils/create-test-app';
 
 describe('run sheets and departure checks', () => {
@@ -107,6 +107,25 @@ describe('run sheets and departure checks', () => {
     const run = await t.http().post(`/api/moves/${m.id}/stage`).set(as('dispatcher')).send({ to: 'running' });
     expect(run.status).toBe(409);
     expect(run.body.details.unmet.map((u: { code: string }) => u.code)).toContain('run_sheet_not_acknowledged');
+  });
+
+  it('lists the move\'s permits with number and validity; a permit issued after the acknowledgement voids it', async () => {
+    const { m, sheet } = await readyMove();
+    await t.http().post(`/api/moves/${m.id}/departure-checks`).set(as('driver')).send(goodChecks(sheet)).expect(201);
+    await t.http().post(`/api/moves/${m.id}/run-sheet/acknowledgement`).set(as('driver')).send({ fingerprint: sheet.fingerprint }).expect(201);
+    const p = await seedPermit(t.ds, { moveId: m.id, jurisdiction: 'TX', status: 'issued', permitNumber: `TX-RS-${Date.now()}`, validFrom: `${daysFromNow(9)}T06:00:00Z`, validTo: `${daysFromNow(10)}T18:00:00Z` });
+    const after = (await t.http().get(`/api/moves/${m.id}/run-sheet`).set(as('driver'))).body;
+    expect(after.permits).toEqual([expect.objectContaining({ jurisdiction: 'TX', number: p.permitNumber, status: 'issued' })]);
+    // valid until noon (Central) on the travel day: it ends before the planned exit from Texas
+    expect(after.permits[0].warning).toMatch(/before the planned exit/);
+    expect(after.fingerprint).not.toBe(sheet.fingerprint);
+    expect(after.acknowledgement.current).toBe(false);
+    const pdf = await t.http().get(`/api/moves/${m.id}/run-sheet.pdf`).set(as('driver')).buffer(true).parse((r, cb) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+    expect(execFileSync('pdftotext', ['-layout', '-', '-'], { input: pdf.body as Buffer }).toString()).toContain(p.permitNumber!);
   });
 
   it.each([

@@ -1,8 +1,9 @@
 import { Injectable, Logger } from '@nestjs/common';
 import { Cron } from '@nestjs/schedule';
-import { DataSource } from 'typeorm';
+import { DataSource, type EntityManager } from 'typeorm';
 import type { ExpiryScanResult } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
+import { MailService } from '../mail/mail.service';
 import { travelDates } from '../moves/assessment.service';
 import { instantToLocal, travelSpan, zoneOf } from './permit-rules';
 import { ACTIVE_MOVE_STAGES } from './permits.service';
@@ -25,11 +26,36 @@ export class ExpiryScanService {
   constructor(
     private readonly ds: DataSource,
     private readonly audit: AuditService,
+    private readonly mail: MailService,
   ) {}
 
   /** Called with the permits newly flagged by a scan (e.g. to e-mail the clerks). */
   onWarnings(listener: ExpiryWarningListener): void {
     this.listeners.push(listener);
+  }
+
+  /** One e-mail per newly flagged permit, to its assignee (or every active permit clerk) and the move's dispatcher,
+   * written to the outbox in the scan's own transaction. */
+  private async mailWarnings(m: EntityManager, flagged: ExpiryScanResult['flagged'], now: Date): Promise<void> {
+    for (const f of flagged) {
+      const [row] = await m.query(
+        `SELECT p.jurisdiction, p.permit_number, mv.reference, mv.id AS move_id,
+                coalesce((SELECT array_agg(u.email) FROM users u WHERE u.id = p.assignee_id AND u.active),
+                         (SELECT array_agg(u.email) FROM users u WHERE u.role = 'permit_clerk' AND u.active), '{}') AS clerks,
+                (SELECT u.email FROM users u WHERE u.id = mv.created_by AND u.active) AS dispatcher
+           FROM permits p JOIN moves mv ON mv.id = p.move_id WHERE p.id = $1`,
+        [f.permitId],
+      );
+      const to = [...new Set([...(row.clerks ?? []), ...(row.dispatcher ? [row.dispatcher] : [])])];
+      if (!to.length) continue;
+      await this.mail.enqueue(m, {
+        to,
+        subject: `Permit warning: ${row.reference} ${row.jurisdiction} ${row.permit_number ?? ''} ${f.warning}`.replace(/\s+/g, ' ').trim(),
+        text: `The ${row.jurisdiction} permit ${row.permit_number ?? '(no number)'} of move ${row.reference} ${f.warning}.\n\nRenew or amend it before the move runs: the permit desk lists it under "expiring soon".\n\nAmberline checked this on ${now.toISOString().slice(0, 16).replace('T', ' ')} UTC.`,
+        dedupeKey: `permit-expiry:${f.permitId}:${f.warning}`,
+        related: { entity: 'permit', id: f.permitId },
+      });
+    }
   }
 
   @Cron('0 15 6 * * *', { name: 'permit-expiry-scan', timeZone: 'America/Chicago' })
@@ -68,6 +94,7 @@ export class ExpiryScanService {
           if (warning) flagged.push({ permitId: r.id, warning });
         }
       }
+      await this.mailWarnings(m, flagged, now);
       return { ran: true, checked: rows.length, flagged };
     });
     if (result.flagged.length) {

@@ -2,7 +2,9 @@ import { join, resolve } from 'node:path';
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { AuditModule } from '../audit/audit.module';
+import { MailModule } from '../mail/mail.module';
 import { MovesModule } from '../moves/moves.module';
+import { RunSheetsModule } from '../run-sheets/run-sheets.module';
 import { DocumentsService } from './documents.service';
 import { PermitDocument } from './entities/permit-document.entity';
 import { PermitPayment } from './entities/permit-payment.entity';
@@ -14,6 +16,7 @@ import { PaymentsService } from './payments/payments.service';
 import { createStripeClient, STRIPE } from './payments/stripe.provider';
 import { PermitsController } from './permits.controller';
 import { PermitsService } from './permits.service';
+import { PermitsRunSheetSource } from './permits-run-sheet';
 import { FILE_STORE } from './storage/file-store';
 import { FsFileStore } from './storage/fs-file-store';
 
@@ -22,13 +25,14 @@ export const defaultFileStoreDir = () => resolve(process.env.FILE_STORE_DIR || j
 
 /** Permits per move and jurisdiction, their PDFs, fee payments and the workflow guard for receiving permits. */
 @Module({
-  imports: [TypeOrmModule.forFeature([Permit, PermitVersion, PermitDocument, PermitPayment]), AuditModule, MovesModule],
+  imports: [TypeOrmModule.forFeature([Permit, PermitVersion, PermitDocument, PermitPayment]), AuditModule, MailModule, MovesModule, RunSheetsModule],
   controllers: [PermitsController, PaymentsController],
   providers: [
     PermitsService,
     DocumentsService,
     PaymentsService,
     ExpiryScanService,
+    PermitsRunSheetSource,
     { provide: STRIPE, useFactory: () => createStripeClient(process.env) },
     { provide: FILE_STORE, useFactory: () => new FsFileStore(defaultFileStoreDir()) },
   ],
