@@ -120,9 +120,14 @@ describe('the permit desk in the browser', () => {
 
     // back on the move, open the Texas permit and record the filing
     await openMovePage(page);
-    await page.getByTestId('open-permit-TX').click();
     const drawer: Locator = page.getByTestId('permit-details');
-    await drawer.waitFor();
+    // the permits list refetches after the sync; a click that lands on a row being replaced is tried again
+    for (let attempt = 0; ; attempt++) {
+      await page.getByTestId('open-permit-TX').click();
+      const opened = await drawer.waitFor({ timeout: 8_000 }).then(() => true, () => false);
+      if (opened) break;
+      if (attempt === 2) await drawer.waitFor();
+    }
     await statusIs(page, 'To file');
     await drawer.getByTestId('permit-to-filed').click();
     await statusIs(page, 'Filed');

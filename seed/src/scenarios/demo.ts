@@ -1,4 +1,4 @@
-import type { MoveArticle, MoveInput, MoveStage, Role, TractorInput, TrailerInput } from '@amberline/common';
+import type { MoveArticle, MoveInput, MoveStage, Role, TractorInput, TrailerInput, VendorInput } from '@amberline/common';
 import type { Db } from '../db';
 import { seedUser } from '../builders/user';
 import { STEP_DECK_DEFAULTS, TRACTOR_DEFAULTS } from '../builders/fleet';
@@ -268,3 +268,31 @@ export function demoDeparture(d: DemoMove['departure'], today: string): string {
   const eve = `${year}-12-24`;
   return eve >= iso(t + 86_400_000) ? eve : `${year + 1}-12-24`;
 }
+
+const vendor = (company: string, contactName: string, slug: string, phone: string, states: string[], certState: string | null): VendorInput => ({
+  company,
+  contactName,
+  email: `dispatch@${slug}.vendor.amberline.example`,
+  phone,
+  states,
+  operators: [
+    { name: contactName, phone, certifications: certState ? [{ state: certState, number: `${certState}-PE-${slug.slice(0, 4).toUpperCase()}71`, expires: '2028-06-30' }] : [] },
+    { name: `${contactName.split(' ')[0] === 'Odessa' ? 'Lyle' : 'Odessa'} Marchetti`, certifications: [] },
+  ],
+  insurance: { carrier: 'Bluestem Mutual', policyNumber: `BM-${slug.slice(0, 6).toUpperCase()}`, liabilityLimitUsd: 1_000_000, autoLimitUsd: 1_000_000, expires: '2027-12-31' },
+  vehicles: [
+    { label: 'Pickup with height pole', plate: `${slug.slice(0, 3).toUpperCase()}-401`, equipment: { heightPole: true, amberLights: true, signs: true, flags: true } },
+    { label: 'Lead car', plate: `${slug.slice(0, 3).toUpperCase()}-402`, equipment: { heightPole: false, amberLights: true, signs: true, flags: true } },
+  ],
+  rates: { basis: 'per_mile', perMileUsd: 1.85, minimumUsd: 400, noGoUsd: 275, layoverUsd: 325 },
+  notes: 'Invented escort vendor of the demo scenario.',
+  active: true,
+});
+
+/** Invented escort (pilot car) vendors covering the demo routes. */
+export const DEMO_VENDORS: VendorInput[] = [
+  vendor('Mesquite Flag Escorts', 'Rosalind Quade', 'mesquiteflag', '+1 512 555 0142', ['TX', 'OK', 'NM'], 'OK'),
+  vendor('Tidewater Pilot Cars', 'Odessa Vireo', 'tidewaterpilot', '+1 804 555 0187', ['VA', 'MD', 'PA', 'DE'], 'VA'),
+  vendor('Gulfbreeze Lead & Chase', 'Harlan Pruett', 'gulfbreeze', '+1 863 555 0119', ['FL', 'GA', 'AL'], 'FL'),
+  vendor('Cascade Ridge Escorts', 'Wren Talbot', 'cascaderidge', '+1 253 555 0164', ['WA', 'OR', 'ID'], 'WA'),
+];
