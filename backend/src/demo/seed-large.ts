@@ -3,12 +3,39 @@ import { NestFactory } from '@nestjs/core';
 import { plainToInstance } from 'class-transformer';
 import { DataSource } from 'typeorm';
 import type { SessionUser } from '@amberline/common';
-import { DEMO_MOVES, DEMO_TRACTORS, DEMO_TRAILERS, demoDeparture, seedTractor, seedTrailer, seedUsersBulk } from '@amberline/seed';
+import { DEMO_MOVES, DEMO_TRACTORS, DEMO_TRAILERS, demoDeparture, seedTractor, seedTrailer, seedUsersBulk, seedVendor, type DemoMove } from '@amberline/seed';
 import { AppModule } from '../app.module';
 import { CreateMoveDto } from '../moves/dto/move.dto';
 import { MovesService } from '../moves/moves.service';
 
-export const LARGE = { moves: 10_000, users: { driver: 150, dispatcher: 30, permit_clerk: 15, admin: 5 } } as const;
+export const LARGE = { moves: 10_000, bookings: 5_000, vendors: 20, users: { driver: 150, dispatcher: 30, permit_clerk: 15, admin: 5 } } as const;
+
+/** Long-haul templates through four or five states (invented customers), so the permit desk holds several permits per move. */
+const excavator = DEMO_MOVES[0];
+const LONG_HAULS: DemoMove[] = [
+  { ...excavator, key: 'long-plains', customer: 'Harrowgate Mining', origin: 'Katy, TX', destination: 'Grand Island, NE', departure: 14, travelDays: 4,
+    route: [
+      { order: 1, jurisdiction: 'TX', roads: 'I-45 N, US 287', miles: 390, roadType: 'multilane', zip: '76301' },
+      { order: 2, jurisdiction: 'OK', roads: 'I-44 E, I-35 N', miles: 210, roadType: 'interstate', zip: '73102' },
+      { order: 3, jurisdiction: 'KS', roads: 'I-35 N, US 81', miles: 250, roadType: 'multilane', zip: '67401' },
+      { order: 4, jurisdiction: 'NE', roads: 'US 81, US 30', miles: 120, roadType: 'two-lane', zip: '68801' },
+    ] },
+  { ...DEMO_MOVES[1], key: 'long-east', customer: 'Tallgrass Wind Services', origin: 'Danville, VA', destination: 'Albany, NY', departure: 20, travelDays: 3,
+    route: [
+      { order: 1, jurisdiction: 'VA', roads: 'US 29 N, I-66 E', miles: 190, roadType: 'multilane', zip: '22030' },
+      { order: 2, jurisdiction: 'MD', roads: 'I-270 N, US 15', miles: 70, roadType: 'interstate', zip: '21701' },
+      { order: 3, jurisdiction: 'PA', roads: 'US 15 N, I-81 N', miles: 240, roadType: 'interstate', zip: '17101' },
+      { order: 4, jurisdiction: 'NY', roads: 'I-88 E', miles: 150, roadType: 'interstate', zip: '12203' },
+    ] },
+  { ...DEMO_MOVES[4], key: 'long-coast', customer: 'Pinecrest Modular Homes', origin: 'Lakeland, FL', destination: 'Richmond, VA', departure: 25, travelDays: 4,
+    route: [
+      { order: 1, jurisdiction: 'FL', roads: 'I-4 E, I-95 N', miles: 230, roadType: 'interstate', zip: '32202' },
+      { order: 2, jurisdiction: 'GA', roads: 'I-95 N', miles: 112, roadType: 'interstate', zip: '31401' },
+      { order: 3, jurisdiction: 'SC', roads: 'I-95 N', miles: 198, roadType: 'interstate', zip: '29501' },
+      { order: 4, jurisdiction: 'NC', roads: 'I-95 N', miles: 182, roadType: 'interstate', zip: '27801' },
+      { order: 5, jurisdiction: 'VA', roads: 'I-95 N', miles: 90, roadType: 'interstate', zip: '23219' },
+    ] },
+];
 
 /**
  * The large dataset for benchmarks: 200 users, a fleet, and 10,000 moves made from the demo moves (each
@@ -45,7 +72,7 @@ export async function seedLarge(now = new Date()): Promise<string> {
     const moves = app.get(MovesService);
     const today = now.toISOString().slice(0, 10);
     const templates: string[] = [];
-    for (const d of DEMO_MOVES) {
+    for (const d of [...DEMO_MOVES, ...LONG_HAULS]) {
       const { key, tractor, trailer, driver, departure, stage, stageReason, purpose, ...rest } = d;
       void key; void driver; void stage; void stageReason; void purpose;
       const dto = plainToInstance(CreateMoveDto, JSON.parse(JSON.stringify({ ...rest, tractorId: tractors.get(tractor), trailerId: trailers.get(trailer), requestedDeparture: demoDeparture(departure, today) })));
@@ -66,8 +93,8 @@ export async function seedLarge(now = new Date()): Promise<string> {
                 t.tractor_id, t.trailer_id, ($2::uuid[])[1 + g % array_length($2::uuid[], 1)], t.slider_setting_ft, t.articles, t.route,
                 t.jurisdictions, t.origin, t.destination, (current_date - 365 + (g * 73) % 730), t.travel_days, NULL, t.summary, $3, now(), now()
            FROM generate_series(1, $1::int) g
-           JOIN (SELECT row_number() OVER (ORDER BY reference) - 1 AS k, * FROM moves WHERE id = ANY($4)) t ON t.k = g % $5`,
-        [copies, drivers, dispatcher.id, templates, templates.length],
+           JOIN moves t ON t.id = ($4::uuid[])[1 + CASE WHEN g % 3 = 0 THEN g % $5 ELSE $5 + g % $6 END]`,
+        [copies, drivers, dispatcher.id, templates, DEMO_MOVES.length, LONG_HAULS.length],
       );
       await m.query(
         `INSERT INTO audit_entries (move_id, entity, entity_id, action, actor_id, after)
@@ -76,9 +103,45 @@ export async function seedLarge(now = new Date()): Promise<string> {
         [dispatcher.id],
       );
     });
+    // permits: one per state that needs one, in statuses that follow the move's stage
+    const clerks = users.filter((u) => u.role === 'permit_clerk').map((u) => u.id);
+    await ds.query(
+      `INSERT INTO permits (move_id, jurisdiction, status, permit_number, filed_at, issued_at, valid_from, valid_to, estimated_fee_cents,
+                            actual_fee_cents, lead_time_days, assignee_id, rule_version)
+       SELECT m.id, j.code, s.status,
+              CASE WHEN s.status = 'issued' THEN j.code || '-L-' || substr(md5(m.id::text || j.code), 1, 8) END,
+              CASE WHEN s.status IN ('filed', 'issued') THEN now() END, CASE WHEN s.status = 'issued' THEN now() END,
+              CASE WHEN s.status = 'issued' THEN m.requested_departure - 1 END, CASE WHEN s.status = 'issued' THEN m.requested_departure + m.travel_days + 1 END,
+              6000 + (abs(hashtext(m.id::text || j.code)) % 30000), CASE WHEN s.status = 'issued' THEN 6000 + (abs(hashtext(m.id::text || j.code)) % 30000) END,
+              2 + abs(hashtext(j.code)) % 4,
+              CASE WHEN abs(hashtext(m.id::text || j.code)) % 4 = 0 THEN NULL ELSE ($1::uuid[])[1 + abs(hashtext(m.id::text)) % array_length($1::uuid[], 1)] END,
+              1
+         FROM moves m
+         CROSS JOIN LATERAL unnest(m.jurisdictions) AS j(code)
+         CROSS JOIN LATERAL (SELECT CASE
+              WHEN m.stage IN ('permits_received','escorts_booked','running','delivered') THEN 'issued'
+              WHEN m.stage = 'cancelled' THEN 'void'
+              ELSE (ARRAY['to_file','to_file','filed','issued','needs_amendment','rejected'])[1 + abs(hashtext(m.id::text || j.code)) % 6] END AS status) s
+        WHERE m.reference LIKE 'AM-L-%' AND (m.summary->'permitsNeeded') ? j.code`,
+      [clerks],
+    );
+    // escort bookings for moves whose assessment asks for escorts, with invented vendors
+    const vendors: string[] = [];
+    for (let i = 0; i < LARGE.vendors; i++) vendors.push((await seedVendor(ds, { company: `Bench Escort Co ${i + 1} ${tag}`, states: ['TX', 'OK', 'KS', 'NE', 'VA', 'MD', 'PA', 'NY', 'FL', 'GA', 'SC', 'NC', 'WA'] })).id);
+    await ds.query(
+      `INSERT INTO escort_bookings (move_id, vendor_id, position, seat, jurisdictions, start_date, end_date, meeting_point, meeting_time, status,
+                                    request_summary, requested_by, plan_revision)
+       SELECT m.id, ($1::uuid[])[1 + abs(hashtext(m.id::text)) % array_length($1::uuid[], 1)], 'lead', 1, m.jurisdictions,
+              m.requested_departure, m.requested_departure + m.travel_days - 1, m.origin, '06:30',
+              CASE WHEN m.stage IN ('escorts_booked','running','delivered') THEN 'confirmed' WHEN m.stage = 'cancelled' THEN 'cancelled' ELSE 'requested' END,
+              jsonb_build_object('reference', m.reference), $2, m.plan_revision
+         FROM moves m WHERE m.reference LIKE 'AM-L-%' AND (m.summary->>'escorts')::int > 0
+        ORDER BY m.reference LIMIT $3`,
+      [vendors, dispatcher.id, LARGE.bookings],
+    );
     await ds.query('ANALYZE');
-    const [{ total }] = await ds.query(`SELECT count(*)::int AS total FROM moves`);
-    return `${users.length} users, 40 tractors, 60 trailers, ${total} moves in ${((Date.now() - started) / 1000).toFixed(1)} s`;
+    const [c] = await ds.query(`SELECT (SELECT count(*) FROM moves)::int AS moves, (SELECT count(*) FROM permits)::int AS permits, (SELECT count(*) FROM escort_bookings)::int AS bookings`);
+    return `${users.length} users, 40 tractors, 60 trailers, ${LARGE.vendors} vendors, ${c.moves} moves, ${c.permits} permits, ${c.bookings} escort bookings in ${((Date.now() - started) / 1000).toFixed(1)} s`;
   } finally {
     await app.close();
   }
