@@ -44,20 +44,22 @@ async function main() {
   const results = [];
   for (const r of routes) {
     const row = { name: r.name, byConn: {} };
-    for (const c of CONNECTIONS) {
-      const out = await cannon({
-        url: BASE + r.path, connections: c, method: r.method || 'GET', body: r.body,
-        headers: { 'content-type': 'application/json', ...(r.noAuth ? {} : { authorization: `Bearer ${token}` }) },
-      });
-      row.byConn[c] = { rps: out.requests.average, p50: out.latency.p50, p95: out.latency.p97_5 !== undefined ? percentile(out, 95) : out.latency.p90, p99: out.latency.p99, errors: out.errors + out.non2xx + out.timeouts };
-    }
-    // SQL statements per request, from pg_stat_statements over 20 sequential requests
+    // SQL statements per request, from pg_stat_statements over 20 sequential requests, measured before the load
+    // (requests still queued after a load run would otherwise be counted too)
     await db.query('SELECT pg_stat_statements_reset()');
     for (let i = 0; i < 20; i++) {
       await fetch(BASE + r.path, { method: r.method || 'GET', body: r.body, headers: { 'content-type': 'application/json', ...(r.noAuth ? {} : { authorization: `Bearer ${token}` }) } }).then((x) => x.text());
     }
     const [{ calls }] = (await db.query(`SELECT coalesce(sum(calls), 0)::int AS calls FROM pg_stat_statements WHERE query NOT ILIKE '%pg_stat_statements%' AND dbid = (SELECT oid FROM pg_database WHERE datname = current_database())`)).rows;
     row.queries = calls / 20;
+    for (const c of CONNECTIONS) {
+      const out = await cannon({
+        url: BASE + r.path, connections: c, method: r.method || 'GET', body: r.body,
+        headers: { 'content-type': 'application/json', ...(r.noAuth ? {} : { authorization: `Bearer ${token}` }) },
+      });
+      await new Promise((res) => setTimeout(res, 1500)); // let queued requests drain before the next cell
+      row.byConn[c] = { rps: out.requests.average, p50: out.latency.p50, p95: out.latency.p97_5 !== undefined ? percentile(out, 95) : out.latency.p90, p99: out.latency.p99, errors: out.errors + out.non2xx + out.timeouts };
+    }
     results.push({ ...r, ...row });
     console.log(`${r.name}: ${CONNECTIONS.map((c) => `${c} conn ${Math.round(row.byConn[c].rps)} req/s p95 ${row.byConn[c].p95} ms`).join(' | ')} | ${row.queries} SQL/request`);
   }

@@ -202,19 +202,25 @@ export class MovesService {
   }
 
   async list(q: ListMovesQuery, viewer: SessionUser): Promise<MovesPage> {
-    const qb = this.moves.createQueryBuilder('m').leftJoinAndSelect('m.driver', 'd');
-    if (q.stage) qb.andWhere('m.stage = :stage', { stage: q.stage });
-    if (q.jurisdiction) qb.andWhere(':j = ANY(m.jurisdictions)', { j: q.jurisdiction });
-    if (viewer.role === 'driver') qb.andWhere('m.driver_id = :me', { me: viewer.id });
+    // the driver join is many-to-one, so one query with LIMIT/OFFSET pages correctly; the count runs without the join
+    const where: string[] = [];
+    const params: Record<string, unknown> = {};
+    if (q.stage) (where.push('m.stage = :stage'), (params.stage = q.stage));
+    if (q.jurisdiction) (where.push(':j = ANY(m.jurisdictions)'), (params.j = q.jurisdiction));
+    if (viewer.role === 'driver') (where.push('m.driver_id = :me'), (params.me = viewer.id));
     if (q.search) {
-      qb.andWhere(`(m.reference || ' ' || m.customer || ' ' || m.commodity || ' ' || m.origin || ' ' || m.destination) ILIKE :s`, {
-        s: `%${q.search.replace(/[%_\\]/g, '\\$&')}%`,
-      });
+      where.push(`(m.reference || ' ' || m.customer || ' ' || m.commodity || ' ' || m.origin || ' ' || m.destination) ILIKE :s`);
+      params.s = `%${q.search.replace(/[%_\\]/g, '\\$&')}%`;
     }
-    if (q.sort === 'updated') qb.orderBy('m.updated_at', 'DESC');
-    else qb.orderBy('m.requested_departure', q.sort === '-departure' ? 'DESC' : 'ASC');
-    qb.addOrderBy('m.id', 'ASC');
-    const [rows, total] = await qb.skip((q.page - 1) * q.pageSize).take(q.pageSize).getManyAndCount();
+    const filtered = (qb: ReturnType<Repository<Move>['createQueryBuilder']>) => {
+      where.forEach((w, i) => (i === 0 ? qb.where(w, params) : qb.andWhere(w, params)));
+      return qb;
+    };
+    const rowsQb = filtered(this.moves.createQueryBuilder('m').leftJoinAndSelect('m.driver', 'd'));
+    if (q.sort === 'updated') rowsQb.orderBy('m.updated_at', 'DESC');
+    else rowsQb.orderBy('m.requested_departure', q.sort === '-departure' ? 'DESC' : 'ASC');
+    rowsQb.addOrderBy('m.id', 'ASC').offset((q.page - 1) * q.pageSize).limit(q.pageSize);
+    const [rows, total] = await Promise.all([rowsQb.getMany(), filtered(this.moves.createQueryBuilder('m')).getCount()]);
     return { items: rows.map(toSummaryDto), total, page: q.page, pageSize: q.pageSize };
   }
 
