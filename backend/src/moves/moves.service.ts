@@ -216,7 +216,10 @@ export class MovesService {
       where.forEach((w, i) => (i === 0 ? qb.where(w, params) : qb.andWhere(w, params)));
       return qb;
     };
-    const rowsQb = filtered(this.moves.createQueryBuilder('m').leftJoinAndSelect('m.driver', 'd'));
+    // only the columns the list shows (no plan JSON), mapped straight from rows
+    const rowsQb = filtered(this.moves.createQueryBuilder('m'))
+      .leftJoin('m.driver', 'd')
+      .select(['m.id', 'm.reference', 'm.customer', 'm.commodity', 'm.stage', 'm.origin', 'm.destination', 'm.requestedDeparture', 'm.jurisdictions', 'm.summary', 'm.updatedAt', 'd.id', 'd.name']);
     if (q.sort === 'updated') rowsQb.orderBy('m.updated_at', 'DESC');
     else rowsQb.orderBy('m.requested_departure', q.sort === '-departure' ? 'DESC' : 'ASC');
     rowsQb.addOrderBy('m.id', 'ASC').offset((q.page - 1) * q.pageSize).limit(q.pageSize);

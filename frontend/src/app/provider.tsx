@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { App as AntApp, ConfigProvider } from 'antd';
+import { ConfigProvider } from 'antd';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { queryClient } from '../lib/query-client';
 import { AuthProvider } from '../lib/auth';
@@ -7,12 +7,12 @@ import { theme } from './theme';
 
 export function AppProvider({ children }: { children: ReactNode }) {
   return (
+    // antd's App (message, notification, modal hooks) wraps the signed-in shell and the public pages that need it,
+    // not the root, so the sign-in page's first load stays light
     <ConfigProvider theme={theme}>
-      <AntApp>
-        <QueryClientProvider client={queryClient}>
-          <AuthProvider>{children}</AuthProvider>
-        </QueryClientProvider>
-      </AntApp>
+      <QueryClientProvider client={queryClient}>
+        <AuthProvider>{children}</AuthProvider>
+      </QueryClientProvider>
     </ConfigProvider>
   );
 }

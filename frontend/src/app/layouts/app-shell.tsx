@@ -1,5 +1,5 @@
 import { Suspense, useMemo } from 'react';
-import { Button, Grid, Layout, Menu, Space, Tag, Typography } from 'antd';
+import { App as AntApp, Button, Grid, Layout, Menu, Space, Tag, Typography } from 'antd';
 import { Link, Outlet, useLocation } from 'react-router-dom';
 import { ROLE_LABELS } from '@amberline/common';
 import { BrandMark } from '../../components/brand-mark';
@@ -17,6 +17,7 @@ export function AppShell() {
     .map((i) => i.path);
 
   return (
+    <AntApp>
     <Layout style={{ minHeight: '100vh' }}>
       <Layout.Header className="no-print" style={{ display: 'flex', alignItems: 'center', gap: 16, paddingInline: 16 }}>
         <Link to="/" style={{ display: 'flex', alignItems: 'center', gap: 8, color: '#fff' }}>
@@ -51,5 +52,6 @@ export function AppShell() {
         </Suspense>
       </Layout.Content>
     </Layout>
+    </AntApp>
   );
 }

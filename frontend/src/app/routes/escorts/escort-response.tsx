@@ -30,6 +30,7 @@ function linkProblem(e: unknown): { status: 'warning' | 'info' | 'error'; title:
 
 function Frame({ children }: { children: React.ReactNode }) {
   return (
+    <App>
     <div style={{ minHeight: '100vh', background: palette.slate50 }}>
       <div style={{ background: palette.slate900, color: '#fff', padding: '12px 16px', display: 'flex', alignItems: 'center', gap: 10 }}>
         <BrandMark size={28} />
@@ -37,6 +38,7 @@ function Frame({ children }: { children: React.ReactNode }) {
       </div>
       <div style={{ maxWidth: 860, margin: '0 auto', padding: 16 }}>{children}</div>
     </div>
+    </App>
   );
 }
 
