@@ -3,6 +3,7 @@ import { STEP_DECK_DEFAULTS, TRACTOR_DEFAULTS } from '../../seed/src/builders/fl
 import { vendorDefaults } from '../../seed/src/builders/vendor';
 import { BASE_URL, launch, screenshot, signIn } from './support/browser';
 import { apiPost, apiToken, pick } from './support/forms';
+import { wideExcavatorArticle } from './support/fixtures';
 
 const stamp = `${Date.now().toString(36)}${process.pid.toString(36)}`.toUpperCase();
 const day = (n: number) => new Date(Date.now() + n * 86_400_000).toISOString().slice(0, 10);
@@ -43,13 +44,7 @@ describe('escort booking in the browser', () => {
     const move = await apiPost<{ id: string; reference: string }>(dispatcher, '/moves', {
       customer: `Larkspur Aggregates ${stamp}`,
       commodity: 'Tracked excavator',
-      articles: [
-        {
-          id: 'A1', description: 'Tracked excavator, boom folded', lengthIn: 384, widthIn: 180, heightIn: 126, weightLb: 62_000, weightSource: 'spec_sheet',
-          positionFromTrailerFrontIn: 150, lateralOffsetIn: 0, dunnageIn: 0, blockedForward: false, heavyEquipment: true, sharpEdges: true,
-          tiedowns: [1, 2, 3, 4].map((n) => ({ label: `chain ${n}`, kind: 'chain', chainSize: '1/2', chainGrade: 70, anchorKind: 'winch_track', path: 'direct', edgeProtection: true })),
-        },
-      ],
+      articles: [wideExcavatorArticle()],
       tractorId: tractor.id,
       trailerId: trailer.id,
       sliderSettingFt: 39,

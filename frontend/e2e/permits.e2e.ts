@@ -5,6 +5,7 @@ import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { ARTIFACTS, BASE_URL, launch, screenshot, signIn } from './support/browser';
 import { apiPost, apiToken } from './support/forms';
+import { wideExcavatorArticle } from './support/fixtures';
 
 const stamp = `${Date.now().toString(36)}${process.pid.toString(36)}`.toUpperCase();
 const day = (n: number) => new Date(Date.now() + n * 86_400_000).toISOString().slice(0, 10);
@@ -49,13 +50,7 @@ describe('the permit desk in the browser', () => {
     const move = await apiPost<{ id: string; reference: string }>(dispatcher, '/moves', {
       customer: `Copperfield Earthworks ${stamp}`,
       commodity: 'Tracked excavator',
-      articles: [
-        {
-          id: 'A1', description: 'Tracked excavator, boom folded', lengthIn: 384, widthIn: 180, heightIn: 126, weightLb: 62_000, weightSource: 'spec_sheet',
-          positionFromTrailerFrontIn: 150, lateralOffsetIn: 0, dunnageIn: 0, blockedForward: false, heavyEquipment: true, sharpEdges: true,
-          tiedowns: [1, 2, 3, 4].map((n) => ({ label: `chain ${n}`, kind: 'chain', chainSize: '1/2', chainGrade: 70, anchorKind: 'winch_track', path: 'direct', edgeProtection: true })),
-        },
-      ],
+      articles: [wideExcavatorArticle()],
       tractorId: tractor.id,
       trailerId: trailer.id,
       sliderSettingFt: 39,
