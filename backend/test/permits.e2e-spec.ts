@@ -278,6 +278,20 @@ describe('/api/permits', () => {
     });
   });
 
+  it('keeps the queue order current: a new departure moves the file-by date of the move\'s permits', async () => {
+    const move = await newMove({ requestedDeparture: daysFromNow(12) });
+    await sync(move.id);
+    const before: { departure: string; file_by: string; lead_time_days: number }[] = await t.ds.query(
+      `SELECT to_char(departure, 'YYYY-MM-DD') AS departure, to_char(file_by, 'YYYY-MM-DD') AS file_by, lead_time_days FROM permits WHERE move_id = $1`, [move.id]);
+    expect(before[0].departure).toBe(daysFromNow(12));
+    const cur = (await t.http().get(`/api/moves/${move.id}`).set(as('dispatcher'))).body;
+    await t.http().patch(`/api/moves/${move.id}`).set(as('dispatcher')).send({ version: cur.version, requestedDeparture: daysFromNow(20) }).expect(200);
+    const after: { departure: string; file_by: string; lead_time_days: number }[] = await t.ds.query(
+      `SELECT to_char(departure, 'YYYY-MM-DD') AS departure, to_char(file_by, 'YYYY-MM-DD') AS file_by, lead_time_days FROM permits WHERE move_id = $1`, [move.id]);
+    expect(after[0].departure).toBe(daysFromNow(20));
+    expect(after[0].file_by).toBe(new Date(Date.parse(`${daysFromNow(20)}T00:00:00Z`) - after[0].lead_time_days * 86_400_000).toISOString().slice(0, 10));
+  });
+
   describe('daily expiry scan', () => {
     it('flags a permit expiring before the planned exit, and one within 48 hours of a controlled clock; clears a flag that no longer applies', async () => {
       const scan = t.app.get(ExpiryScanService);

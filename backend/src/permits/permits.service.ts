@@ -24,9 +24,10 @@ import { cents, factsFromAssessment, instantToLocal, localToInstant, permittedDi
 export const ACTIVE_MOVE_STAGES = ['requested', 'permits_received', 'escorts_booked', 'running'] as const;
 
 const SORTS: Record<string, string> = {
-  urgency: `CASE WHEN p.status IN ('issued','void') THEN 1 ELSE 0 END, (m.requested_departure - p.lead_time_days) ASC, m.requested_departure ASC`,
-  departure: 'm.requested_departure ASC, p.jurisdiction ASC',
-  '-departure': 'm.requested_departure DESC, p.jurisdiction ASC',
+  // open permits first, by the date they must be filed by, then departure (columns kept on the permit row, indexed)
+  urgency: `p.urgency_group, p.file_by ASC, p.departure ASC`,
+  departure: 'p.departure ASC, p.jurisdiction ASC',
+  '-departure': 'p.departure DESC, p.jurisdiction ASC',
   jurisdiction: 'p.jurisdiction ASC, m.requested_departure ASC',
   status: `array_position(ARRAY['to_file','needs_amendment','rejected','filed','issued','void']::varchar[], p.status), m.requested_departure ASC`,
   updated: 'p.updated_at DESC',
