@@ -27,14 +27,25 @@ function conditionLines(p: Permit): string[] {
 @Injectable()
 export class PermitsRunSheetSource implements RunSheetSource, OnModuleInit {
   readonly name = 'permits';
+  /** One read of a move's permits per run-sheet build (both methods receive the same move object). */
+  private readonly loaded = new WeakMap<Move, Promise<Permit[]>>();
   constructor(private readonly registry: RunSheetSourcesRegistry) {}
+
+  private permitsOf(move: Move, manager: EntityManager): Promise<Permit[]> {
+    let p = this.loaded.get(move);
+    if (!p) {
+      p = manager.find(Permit, { where: { moveId: move.id, status: Not('void') }, order: { jurisdiction: 'ASC', createdAt: 'ASC' } });
+      this.loaded.set(move, p);
+    }
+    return p;
+  }
 
   onModuleInit(): void {
     this.registry.register(this);
   }
 
   async permits(move: Move, manager: EntityManager): Promise<RunSheetPermit[]> {
-    const list = await manager.find(Permit, { where: { moveId: move.id, status: Not('void') }, order: { jurisdiction: 'ASC', createdAt: 'ASC' } });
+    const list = await this.permitsOf(move, manager);
     if (!list.length) return [];
     const docs = await manager.find(PermitDocument, { where: { permitId: In(list.map((p) => p.id)) }, order: { version: 'DESC' } });
     const dates = travelDates(move.requestedDeparture, move.travelDays);
@@ -63,7 +74,7 @@ export class PermitsRunSheetSource implements RunSheetSource, OnModuleInit {
 
   /** The smallest of each permitted dimension across the move's issued permits: what the loaded rig must not exceed. */
   async permittedDimensions(move: Move, manager: EntityManager): Promise<{ heightIn: number; widthIn: number; lengthIn: number } | null> {
-    const issued = (await manager.find(Permit, { where: { moveId: move.id, status: 'issued' } })).filter((p) => p.permitted);
+    const issued = (await this.permitsOf(move, manager)).filter((p) => p.status === 'issued' && p.permitted);
     if (!issued.length) return null;
     return {
       heightIn: Math.min(...issued.map((p) => p.permitted!.heightIn)),
