@@ -22,16 +22,26 @@ source backend/scripts/fakes.sh
 start_fakes
 
 mkdir -p .data
-RESULTS=.data/jest-results.json
-rm -f "$RESULTS"
-NODE_OPTIONS="--experimental-vm-modules --disable-warning=ExperimentalWarning" npx jest \
-  --projects common/jest.config.cjs backend/jest.config.cjs frontend/e2e/jest.config.cjs \
-  --maxWorkers=2 --testTimeout=30000 --forceExit --json --outputFile="$RESULTS" "$@"
-rc=$?
-if [ -s "$RESULTS" ]; then
-  node -e 'const r=require(process.argv[1]);console.log(`${r.numPassedTests} passed, ${r.numFailedTests} failed`)' "$ROOT/$RESULTS"
-else
-  echo "0 passed, 1 failed"
-  [ $rc -eq 0 ] && rc=1
-fi
+export NODE_OPTIONS="--experimental-vm-modules --disable-warning=ExperimentalWarning"
+# unit and integration tests side by side; then the browser tests one file at a time, so the single server under
+# test and Chromium are not starved of the machine's two cores
+run_jest() { # run_jest <results-file> <jest args...>
+  local out="$1"; shift
+  rm -f "$out"
+  npx jest --testTimeout=30000 --forceExit --json --outputFile="$out" "$@"
+}
+rc=0
+run_jest .data/jest-unit.json --projects common/jest.config.cjs backend/jest.config.cjs --maxWorkers=2 --passWithNoTests "$@" || rc=$?
+run_jest .data/jest-browser.json --projects frontend/e2e/jest.config.cjs --runInBand --passWithNoTests "$@" || rc=$?
+node -e '
+  const fs = require("fs");
+  let passed = 0, failed = 0, ran = 0;
+  for (const f of process.argv.slice(1)) {
+    if (!fs.existsSync(f)) { failed += 1; continue; }
+    const r = JSON.parse(fs.readFileSync(f, "utf8"));
+    passed += r.numPassedTests; failed += r.numFailedTests + (r.numRuntimeErrorTestSuites || 0); ran += r.numTotalTests;
+  }
+  console.log(`${passed} passed, ${failed} failed`);
+  if (ran === 0) process.exit(1);
+' .data/jest-unit.json .data/jest-browser.json || rc=1
 exit $rc

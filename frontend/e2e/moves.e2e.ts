@@ -157,7 +157,7 @@ describe('moves in the browser', () => {
     expect(await page.getByTestId('move-flags').first().textContent()).toMatch(/escort/);
     expect(consoleErrors.filter((e) => !/favicon/.test(e))).toEqual([]);
     await page.close();
-  }, 120_000);
+  }, 180_000);
 
   it('keeps the move page, fleet and rulebook usable on a 390 px phone', async () => {
     const page = await browser.newPage({ viewport: { width: 390, height: 844 } });
@@ -217,5 +217,5 @@ describe('moves in the browser', () => {
     await history.getByText('Reason: Customer postponed the job').waitFor();
     await screenshot(page, 'move-page-cancelled');
     await page.close();
-  }, 120_000);
+  }, 180_000);
 });
