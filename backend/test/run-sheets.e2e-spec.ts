@@ -74,6 +74,13 @@ describe('run sheets and departure checks', () => {
     expect(ack.status).toBe(409);
     const hist = (await t.http().get(`/api/moves/${m.id}/history`).set(as('dispatcher'))).body;
     expect(hist.some((h: { action: string }) => h.action === 'departure_blocked')).toBe(true);
+    // and an e-mail to the dispatcher who opened the move is in the outbox, written with the checks
+    const [dispatcherEmail] = await t.ds.query(`SELECT u.email FROM users u JOIN moves m ON m.created_by = u.id WHERE m.id = $1`, [m.id]);
+    const mails = await t.ds.query(`SELECT to_addresses, subject, text_body FROM mail_outbox WHERE related_entity = 'departure_checks' AND related_id = $1`, [res.body.id]);
+    expect(mails).toHaveLength(1);
+    expect(mails[0].to_addresses).toContain(dispatcherEmail.email);
+    expect(mails[0].subject).toBe(`Departure blocked: ${m.reference} (${m.customer})`);
+    expect(mails[0].text_body).toMatch(/measured height .* over the planned/);
     const run = await t.http().post(`/api/moves/${m.id}/stage`).set(as('dispatcher')).send({ to: 'running' });
     expect(run.status).toBe(409);
     expect(run.body.details.unmet.map((u: { code: string }) => u.code)).toContain('run_sheet_not_acknowledged');

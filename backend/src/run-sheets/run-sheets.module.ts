@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { AuditModule } from '../audit/audit.module';
+import { MailModule } from '../mail/mail.module';
 import { MovesModule } from '../moves/moves.module';
 import { DepartureChecks } from './entities/departure-checks.entity';
 import { RunSheetAcknowledgement } from './entities/run-sheet-acknowledgement.entity';
@@ -9,7 +10,7 @@ import { RunSheetsController } from './run-sheets.controller';
 import { RunSheetsService } from './run-sheets.service';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([DepartureChecks, RunSheetAcknowledgement]), AuditModule, MovesModule],
+  imports: [TypeOrmModule.forFeature([DepartureChecks, RunSheetAcknowledgement]), AuditModule, MailModule, MovesModule],
   controllers: [RunSheetsController],
   providers: [RunSheetsService, RunSheetSourcesRegistry],
   exports: [RunSheetSourcesRegistry, RunSheetsService],

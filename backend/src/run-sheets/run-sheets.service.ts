@@ -6,6 +6,7 @@ import {
   type CheckFinding, type DepartureChecksDto, type RunSheetDto, type SessionUser, type UnmetCondition,
 } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
+import { MailService } from '../mail/mail.service';
 import { AppException } from '../core/app-exception';
 import { Trailer } from '../fleet/entities/trailer.entity';
 import type { Move } from '../moves/entities/move.entity';
@@ -52,6 +53,7 @@ export class RunSheetsService implements OnModuleInit {
     private readonly audit: AuditService,
     private readonly extensions: MoveExtensionsRegistry,
     private readonly sources: RunSheetSourcesRegistry,
+    private readonly mail: MailService,
   ) {}
 
   onModuleInit(): void {
@@ -160,6 +162,25 @@ export class RunSheetsService implements OnModuleInit {
         moveId, entity: 'run_sheet', entityId: saved.id, action: outcome === 'blocked' ? 'departure_blocked' : 'departure_checks_passed', actorId: driver.id,
         after: { measured: { heightIn: dto.measuredHeightIn, widthIn: dto.measuredWidthIn, lengthIn: dto.measuredLengthIn }, findings: findings.map((f) => f.message) },
       });
+      if (outcome === 'blocked') {
+        // the dispatcher who opened the move (and every active admin) hears of it at once, through the outbox
+        const [row] = await m.query(
+          `SELECT array_remove(array_agg(DISTINCT u.email), NULL) AS emails FROM users u
+            WHERE u.active AND (u.id = (SELECT created_by FROM moves WHERE id = $1) OR u.role = 'admin')`,
+          [moveId],
+        );
+        if (row?.emails?.length) {
+          await this.mail.enqueue(m, {
+            to: row.emails,
+            subject: `Departure blocked: ${move.reference} (${move.customer})`,
+            text: `${driver.name || 'The driver'} recorded the departure checks for ${move.reference} and they block departure:\n\n${findings
+              .filter((f) => f.blocking)
+              .map((f) => `- ${f.message}`)
+              .join('\n')}\n\nThe move cannot run until the checks pass and the driver acknowledges the run sheet again.`,
+            related: { entity: 'departure_checks', id: saved.id },
+          });
+        }
+      }
       const full = await m.findOneOrFail(DepartureChecks, { where: { id: saved.id }, relations: { driver: true } });
       return toChecksDto(full);
     });
