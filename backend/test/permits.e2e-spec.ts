@@ -278,6 +278,16 @@ describe('/api/permits', () => {
     });
   });
 
+  it('voids the open permits of a cancelled move in the same transaction, with the reason in their history', async () => {
+    const move = await newMove();
+    await sync(move.id);
+    expect((await permitsOf(move.id)).map((p) => p.status)).toEqual(['to_file']);
+    await t.http().post(`/api/moves/${move.id}/stage`).set(as('dispatcher')).send({ to: 'cancelled', reason: 'customer postponed' }).expect(201);
+    const after = await permitsOf(move.id);
+    expect(after.map((p) => p.status)).toEqual(['void']);
+    expect(after[0].history[0]).toMatchObject({ status: 'void', reason: 'the move was cancelled' });
+  });
+
   it('keeps the queue order current: a new departure moves the file-by date of the move\'s permits', async () => {
     const move = await newMove({ requestedDeparture: daysFromNow(12) });
     await sync(move.id);

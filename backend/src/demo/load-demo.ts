@@ -72,7 +72,7 @@ export async function loadDemo(now = new Date()): Promise<string> {
       );
       const move = await moves.create(body, dispatcher, now);
       // the permit desk's queue: one permit per state that needs one, from the assessment
-      await permits.syncForMove(move.id, clerk, now);
+      if (stage !== 'cancelled') await permits.syncForMove(move.id, clerk, now);
       if (stage !== 'requested' && stage !== 'cancelled') {
         // later stages: the clerk has filed and received each permit and attached the state's PDF (fees left to pay)
         const dates = travelDates(move.requestedDeparture, move.travelDays);

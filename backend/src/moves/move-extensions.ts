@@ -17,6 +17,8 @@ export interface MoveExtension {
   unmetConditions?(ctx: TransitionContext): Promise<UnmetCondition[]>;
   /** Extra lines for the audit entry of a transition that passed (e.g. "no escort needed: …"). */
   transitionNotes?(ctx: TransitionContext): Promise<string[]>;
+  /** Runs in the transition's transaction after the stage changed (e.g. cancelling closes what belongs to the move). */
+  afterTransition?(ctx: TransitionContext & { from: MoveStage }): Promise<void>;
   /** Runs in the same transaction when dimensions, weights, equipment or the route change. */
   onPlanChanged?(ctx: PlanChangeContext): Promise<void>;
 }

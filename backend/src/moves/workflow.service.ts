@@ -58,6 +58,7 @@ export class WorkflowService {
       }
       for (const ext of this.extensions.all()) if (ext.transitionNotes) notes.push(...(await ext.transitionNotes(ctx)));
       await manager.update(Move, { id }, { stage: dto.to, version: move.version + 1, updatedAt: now });
+      for (const ext of this.extensions.all()) if (ext.afterTransition) await ext.afterTransition({ ...ctx, from: move.stage });
       await this.audit.record(manager, {
         moveId: id, entity: 'move', entityId: id, action: 'stage', actorId: actor.id,
         before: { stage: move.stage }, after: { stage: dto.to, ruleVersions: assessment.ruleVersions, ...(notes.length ? { notes } : {}) },

@@ -49,6 +49,7 @@ export class PermitsService implements OnModuleInit {
       name: 'permits',
       unmetConditions: (ctx) => this.unmetConditions(ctx),
       onPlanChanged: (ctx) => this.onPlanChanged(ctx),
+      afterTransition: (ctx) => (ctx.to === 'cancelled' ? this.voidForCancelledMove(ctx.manager, ctx.move.id, ctx.actor) : Promise.resolve()),
     });
   }
 
@@ -370,6 +371,15 @@ export class PermitsService implements OnModuleInit {
   }
 
   // ---------------------------------------------------------------- the move's workflow
+
+  /** A cancelled move's open permits are voided in the cancelling transaction (refunds stay a clerk's decision). */
+  private async voidForCancelledMove(m: EntityManager, moveId: string, actor: SessionUser): Promise<void> {
+    const now = new Date();
+    const open = await m.find(Permit, { where: { moveId, status: Not('void') }, lock: { mode: 'pessimistic_write' } });
+    for (const p of open) {
+      await this.saveChange(m, p, m.create(Permit, { ...p, status: 'void' }), actor, { action: 'voided', reason: 'the move was cancelled' }, now);
+    }
+  }
 
   private async onPlanChanged(ctx: PlanChangeContext): Promise<void> {
     const now = new Date();
