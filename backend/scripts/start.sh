@@ -4,28 +4,9 @@
 set -euo pipefail
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/../.." && pwd)"
 cd "$ROOT"
-export PGPORT="${PGPORT:-54329}" PGDB="${PGDB:-amberline}"
-PIDS=()
-cleanup() {
-  trap - EXIT INT TERM
-  for p in "${PIDS[@]}"; do kill "$p" 2>/dev/null || true; done
-  wait 2>/dev/null || true
-  bash backend/scripts/pg.sh stop || true
-  echo "amberline: stopped"
-}
-trap cleanup EXIT INT TERM
-
+source backend/scripts/local-stack.sh
 bash backend/scripts/build.sh
-export DATABASE_URL="$(bash backend/scripts/pg.sh start)"
-mkdir -p .data
-[ -s .data/jwt-secret ] || node -e 'process.stdout.write(require("crypto").randomBytes(32).toString("hex"))' > .data/jwt-secret
-export JWT_SECRET="${JWT_SECRET:-$(cat .data/jwt-secret)}"
-export PORT="${PORT:-3000}" HOST=127.0.0.1 NODE_ENV=production
-source backend/scripts/fakes.sh
-start_fakes
-
-node backend/dist/database/migrate.js
-node backend/dist/demo/load-demo.js
+bring_up production
 node backend/dist/main.js &
 PIDS+=($!)
 echo "amberline: http://127.0.0.1:$PORT (API docs at /api/docs; Ctrl-C stops)"

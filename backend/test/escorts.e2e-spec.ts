@@ -19,10 +19,10 @@ describe('escort vendors and bookings (/api/vendors, /api/moves/:id/escort-booki
   beforeAll(async () => {
     catcher = await startMailCatcher();
     t = await createMailTestApp(catcher.port);
-    for (const role of ['admin', 'dispatcher', 'permit_clerk', 'driver'] as Role[]) {
-      const u = await t.signedIn({ role });
-      tokens[role] = u.token;
-      emails[role] = u.email;
+    const users = await t.signedInAll();
+    for (const role of Object.keys(users) as Role[]) {
+      tokens[role] = users[role].token;
+      emails[role] = users[role].email;
     }
     tractorId = (await seedTractor(t.ds)).id;
     trailerId = (await seedTrailer(t.ds)).id;

@@ -10,7 +10,7 @@ describe('/api/fleet', () => {
   const tokens = {} as Record<Role, string>;
   beforeAll(async () => {
     t = await createTestApp();
-    for (const role of ['admin', 'dispatcher', 'permit_clerk', 'driver'] as Role[]) tokens[role] = (await t.signedIn({ role })).token;
+    for (const [role, u] of Object.entries(await t.signedInAll())) tokens[role as Role] = u.token;
   });
   afterAll(() => t.close());
   const as = (role: Role) => ({ authorization: `Bearer ${tokens[role]}` });

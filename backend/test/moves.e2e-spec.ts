@@ -11,11 +11,11 @@ describe('/api/moves', () => {
   let driverId: string;
   beforeAll(async () => {
     t = await createTestApp();
-    for (const role of ['admin', 'dispatcher', 'permit_clerk', 'driver'] as Role[]) {
-      const u = await t.signedIn({ role });
-      tokens[role] = u.token;
-      if (role === 'driver') driverId = u.id;
+    const users = await t.signedInAll();
+    for (const role of Object.keys(users) as Role[]) {
+      tokens[role] = users[role].token;
     }
+    driverId = users.driver.id;
     tractorId = (await seedTractor(t.ds)).id;
     trailerId = (await seedTrailer(t.ds)).id;
   });

@@ -36,7 +36,7 @@ describe('permit fee payments', () => {
     store = mkdtempSync(join(tmpdir(), 'amberline-pay-files-'));
     process.env.FILE_STORE_DIR = store;
     t = await createTestApp();
-    for (const role of ['admin', 'dispatcher', 'permit_clerk', 'driver'] as Role[]) tokens[role] = (await t.signedIn({ role })).token;
+    for (const [role, u] of Object.entries(await t.signedInAll())) tokens[role as Role] = u.token;
     tractorId = (await seedTractor(t.ds)).id;
     trailerId = (await seedTrailer(t.ds)).id;
   });

@@ -23,10 +23,10 @@ describe('permit PDFs', () => {
     store = mkdtempSync(join(tmpdir(), 'amberline-files-'));
     process.env.FILE_STORE_DIR = store;
     t = await createTestApp();
-    for (const role of ['admin', 'dispatcher', 'permit_clerk', 'driver'] as Role[]) {
-      const u = await t.signedIn({ role });
-      tokens[role] = u.token;
-      ids[role] = u.id;
+    const users = await t.signedInAll();
+    for (const role of Object.keys(users) as Role[]) {
+      tokens[role] = users[role].token;
+      ids[role] = users[role].id;
     }
     const tractorId = (await seedTractor(t.ds)).id;
     const trailerId = (await seedTrailer(t.ds)).id;

@@ -14,10 +14,10 @@ describe('/api/permits', () => {
   let trailerId: string;
   beforeAll(async () => {
     t = await createTestApp();
-    for (const role of ['admin', 'dispatcher', 'permit_clerk', 'driver'] as Role[]) {
-      const u = await t.signedIn({ role });
-      tokens[role] = u.token;
-      ids[role] = u.id;
+    const users = await t.signedInAll();
+    for (const role of Object.keys(users) as Role[]) {
+      tokens[role] = users[role].token;
+      ids[role] = users[role].id;
     }
     tractorId = (await seedTractor(t.ds)).id;
     trailerId = (await seedTrailer(t.ds)).id;

@@ -13,11 +13,11 @@ describe('run sheets and departure checks', () => {
   let trailerId: string;
   beforeAll(async () => {
     t = await createTestApp();
-    for (const role of ['admin', 'dispatcher', 'permit_clerk', 'driver'] as Role[]) {
-      const u = await t.signedIn({ role });
-      tokens[role] = u.token;
-      if (role === 'driver') driverId = u.id;
+    const users = await t.signedInAll();
+    for (const role of Object.keys(users) as Role[]) {
+      tokens[role] = users[role].token;
     }
+    driverId = users.driver.id;
     otherDriver = (await t.signedIn({ role: 'driver' })).token;
     tractorId = (await seedTractor(t.ds)).id;
     trailerId = (await seedTrailer(t.ds)).id;

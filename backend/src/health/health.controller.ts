@@ -19,12 +19,15 @@ export class HealthController {
   @Public()
   @Get()
   async health(@Res({ passthrough: true }) res: Response): Promise<{ status: string; db: string }> {
+    let timer: NodeJS.Timeout | undefined;
     try {
-      await Promise.race([this.ds.query('SELECT 1'), new Promise((_, rej) => setTimeout(() => rej(new Error('timeout')), 2000))]);
+      await Promise.race([this.ds.query('SELECT 1'), new Promise((_, rej) => (timer = setTimeout(() => rej(new Error('timeout')), 2000)))]);
       return { status: 'ok', db: 'up' };
     } catch {
       res.status(503);
       return { status: 'degraded', db: 'down' };
+    } finally {
+      clearTimeout(timer);
     }
   }
 }

@@ -1,6 +1,6 @@
 import { Injectable, Logger, OnApplicationBootstrap } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { DataSource, In, Repository } from 'typeorm';
+import { DataSource, Repository } from 'typeorm';
 import {
   assessJurisdiction, FEDERAL_DEFAULT_RULE, validateJurisdictionRule, JURISDICTIONS, jurisdictionByCode, SAMPLE_RULES,
   type JurisdictionRule, type JurisdictionSummaryDto, type RuleVersionDto, type SessionUser,
@@ -117,10 +117,5 @@ export class RulebookService implements OnApplicationBootstrap {
     });
     const v = await this.versions.findOne({ where: { id }, relations: { createdBy: true } });
     return toVersionDto(v!);
-  }
-
-  async exists(codes: string[]): Promise<Set<string>> {
-    const rows = await this.jurisdictions.findBy({ code: In(codes) });
-    return new Set(rows.map((r) => r.code));
   }
 }

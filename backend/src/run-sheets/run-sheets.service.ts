@@ -3,7 +3,7 @@ import { Injectable, OnModuleInit } from '@nestjs/common';
 import { DataSource, EntityManager, IsNull } from 'typeorm';
 import {
   DEPARTURE_TOLERANCE_IN, estimateAxleLoadFromGauge, formatFeetInches, GAUGE_CAUTION, PLANNING_CAUTION, RULEBOOK_CAUTION,
-  type CheckFinding, type DepartureChecksDto, type RunSheetDto, type SessionUser, type UnmetCondition,
+  type AssessmentDto, type CheckFinding, type DepartureChecksDto, type RunSheetDto, type SessionUser, type UnmetCondition,
 } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
 import { MailService } from '../mail/mail.service';
@@ -59,7 +59,7 @@ export class RunSheetsService implements OnModuleInit {
   onModuleInit(): void {
     this.extensions.register({
       name: 'run-sheets',
-      unmetConditions: async (ctx) => (ctx.to === 'running' ? this.unmetForRunning(ctx.move, ctx.manager, ctx.assessment.computedAt) : []),
+      unmetConditions: async (ctx) => (ctx.to === 'running' ? this.unmetForRunning(ctx.move, ctx.manager, ctx.assessment) : []),
       onPlanChanged: async (ctx) => {
         await ctx.manager.update(RunSheetAcknowledgement, { moveId: ctx.after.id, voidedAt: IsNull() }, {
           voidedAt: new Date(), voidReason: `plan changed (${ctx.changed.join(', ')}): a new acknowledgement is needed`,
@@ -75,9 +75,10 @@ export class RunSheetsService implements OnModuleInit {
     return move;
   }
 
-  async build(moveId: string, viewer: SessionUser, now: Date, manager: EntityManager = this.ds.manager): Promise<RunSheetDto> {
-    const move = await this.load(moveId, viewer, manager);
-    const assessment = await this.moves.assessmentOf(move, now, manager);
+  /** `known` passes a move and assessment the caller already holds (the workflow guard), so they are not read twice. */
+  async build(moveId: string, viewer: SessionUser, now: Date, manager: EntityManager = this.ds.manager, known?: { move: Move; assessment: AssessmentDto }): Promise<RunSheetDto> {
+    const move = known?.move ?? (await this.load(moveId, viewer, manager));
+    const assessment = known?.assessment ?? (await this.moves.assessmentOf(move, now, manager));
     const r = assessment.result;
     const permits = (await Promise.all(this.sources.all().map((s) => s.permits?.(move, manager) ?? []))).flat();
     const escorts = (await Promise.all(this.sources.all().map((s) => s.escorts?.(move, manager) ?? []))).flat();
@@ -209,9 +210,9 @@ export class RunSheetsService implements OnModuleInit {
     return rows.map(toChecksDto);
   }
 
-  private async unmetForRunning(move: Move, manager: EntityManager, computedAt: string): Promise<UnmetCondition[]> {
+  private async unmetForRunning(move: Move, manager: EntityManager, assessment: AssessmentDto): Promise<UnmetCondition[]> {
     if (!move.driverId) return []; // the moves module already reports the missing driver
-    const sheet = await this.build(move.id, { id: move.driverId, role: 'driver', email: '', name: '' }, new Date(computedAt), manager);
+    const sheet = await this.build(move.id, { id: move.driverId, role: 'driver', email: '', name: '' }, new Date(assessment.computedAt), manager, { move, assessment });
     if (!sheet.acknowledgement) return [{ code: 'run_sheet_not_acknowledged', message: 'the driver has not acknowledged the run sheet after passing the departure checks' }];
     if (!sheet.acknowledgement.current) return [{ code: 'run_sheet_changed', message: 'the run sheet changed since the driver acknowledged it: a new acknowledgement is needed' }];
     return [];

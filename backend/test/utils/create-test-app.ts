@@ -1,6 +1,7 @@
 import type { INestApplication } from '@nestjs/common';
-import { Test } from '@nestjs/testing';
+import { Test, type TestingModuleBuilder } from '@nestjs/testing';
 import { DataSource } from 'typeorm';
+import type { Role } from '@amberline/common';
 import { seedUser, type SeededUser, type SeedUserInput } from '@amberline/seed';
 import request from 'supertest';
 import { AppModule } from '../../src/app.module';
@@ -12,6 +13,8 @@ export type TestApp = {
   http: () => ReturnType<typeof request>;
   /** A user of the given role with a fresh token. */
   signedIn: (input?: SeedUserInput) => Promise<SeededUser & { token: string }>;
+  /** One fresh signed-in user per role, by role. */
+  signedInAll: () => Promise<Record<Role, SeededUser & { token: string }>>;
   close: () => Promise<void>;
 };
 
@@ -19,9 +22,10 @@ let ipCounter = 1;
 /** A distinct client address per call (through X-Forwarded-For), so sign-in limits of one test do not touch another. */
 export const nextIp = () => `10.${process.pid % 250}.${Math.floor(ipCounter / 250) % 250}.${ipCounter++ % 250}`;
 
-/** Boots the real AppModule against the test database, with the same settings as the server. */
-export async function createTestApp(): Promise<TestApp> {
-  const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).compile();
+/** Boots the real AppModule against the test database, with the same settings as the server. `override` may
+ * replace providers (e.g. the mail settings of one test file). */
+export async function createTestApp(override: (b: TestingModuleBuilder) => TestingModuleBuilder = (b) => b): Promise<TestApp> {
+  const moduleRef = await override(Test.createTestingModule({ imports: [AppModule] })).compile();
   const app = moduleRef.createNestApplication({ rawBody: true, logger: ['error', 'warn'] });
   configureApp(app);
   await app.init();
@@ -33,5 +37,10 @@ export async function createTestApp(): Promise<TestApp> {
     if (res.status !== 200) throw new Error(`sign-in failed: ${res.status} ${JSON.stringify(res.body)}`);
     return { ...user, token: res.body.accessToken as string };
   };
-  return { app, ds, http, signedIn, close: () => app.close() };
+  const signedInAll = async () => {
+    const out = {} as Record<Role, SeededUser & { token: string }>;
+    for (const role of ['admin', 'dispatcher', 'permit_clerk', 'driver'] as Role[]) out[role] = await signedIn({ role });
+    return out;
+  };
+  return { app, ds, http, signedIn, signedInAll, close: () => app.close() };
 }

@@ -1,17 +1,11 @@
 import type { AddressInfo } from 'node:net';
-import { Test } from '@nestjs/testing';
 import { simpleParser } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
-import request from 'supertest';
-import { DataSource } from 'typeorm';
-import { seedUser, type SeedUserInput } from '@amberline/seed';
-import { AppModule } from '../../src/app.module';
-import { configureApp } from '../../src/configure-app';
 import { ESCORT_SETTINGS, type EscortSettings } from '../../src/escorts/escort.settings';
 import { EscortRemindersService } from '../../src/escorts/escort-reminders.service';
 import { MailService } from '../../src/mail/mail.service';
 import { MAIL_SETTINGS, type MailSettings } from '../../src/mail/mail.settings';
-import { nextIp, type TestApp } from './create-test-app';
+import { createTestApp, type TestApp } from './create-test-app';
 
 export type CaughtMail = {
   to: string[];
@@ -94,24 +88,14 @@ export async function createMailTestApp(
     maxBackoffMs: 3_600_000,
     timeoutMs: 2_000,
   };
-  const moduleRef = await Test.createTestingModule({ imports: [AppModule] })
-    .overrideProvider(MAIL_SETTINGS)
-    .useValue(mailSettings)
-    .overrideProvider(ESCORT_SETTINGS)
-    .useValue({ reminderIntervalMs: schedules.reminderIntervalMs ?? 0 } satisfies EscortSettings)
-    .compile();
-  const app = moduleRef.createNestApplication({ rawBody: true, logger: ['error', 'warn'] });
-  configureApp(app);
-  await app.init();
-  const ds = app.get(DataSource);
-  const http = () => request(app.getHttpServer());
-  const signedIn = async (input: SeedUserInput = {}) => {
-    const user = await seedUser(ds, input);
-    const res = await http().post('/api/auth/login').set('x-forwarded-for', nextIp()).send({ email: user.email, password: user.password });
-    if (res.status !== 200) throw new Error(`sign-in failed: ${res.status} ${JSON.stringify(res.body)}`);
-    return { ...user, token: res.body.accessToken as string };
-  };
-  return { app, ds, http, signedIn, close: () => app.close(), mail: app.get(MailService), reminders: app.get(EscortRemindersService), channel };
+  const t = await createTestApp((b) =>
+    b
+      .overrideProvider(MAIL_SETTINGS)
+      .useValue(mailSettings)
+      .overrideProvider(ESCORT_SETTINGS)
+      .useValue({ reminderIntervalMs: schedules.reminderIntervalMs ?? 0 } satisfies EscortSettings),
+  );
+  return { ...t, mail: t.app.get(MailService), reminders: t.app.get(EscortRemindersService), channel };
 }
 
 /** The answer link's token in a caught e-mail. */

@@ -19,12 +19,15 @@ export function AppShell() {
   return (
     <AntApp>
     <Layout style={{ minHeight: '100vh' }}>
-      <Layout.Header className="no-print" style={{ display: 'flex', alignItems: 'center', gap: 16, paddingInline: 16 }}>
+      <Layout.Header className="no-print" style={{ display: 'flex', alignItems: 'center', gap: screens.sm ? 16 : 8, paddingInline: screens.sm ? 16 : 8 }}>
         <Link to="/" style={{ display: 'flex', alignItems: 'center', gap: 8, color: '#fff' }}>
           <BrandMark />
-          <Typography.Text strong style={{ color: '#fff', fontSize: 18 }}>
-            Amberline
-          </Typography.Text>
+          {/* on a phone the name gives way, so the menu items stay readable instead of folding into "…" */}
+          {screens.sm && (
+            <Typography.Text strong style={{ color: '#fff', fontSize: 18 }}>
+              Amberline
+            </Typography.Text>
+          )}
         </Link>
         <Menu
           theme="dark"
