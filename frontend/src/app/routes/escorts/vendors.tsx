@@ -58,7 +58,7 @@ export function VendorsPage() {
                 {v.operators.map((o) => (
                   <div key={o.name}>
                     {o.name}
-                    {o.certifications.length ? <Typography.Text type="secondary"> · {o.certifications.map((c) => `${c.state} to ${c.expires}`).join(', ')}</Typography.Text> : null}
+                    {o.certifications.length ? <Typography.Text type="secondary"> · {o.certifications.map((c) => `${c.state} certificate valid to ${c.expires}`).join(', ')}</Typography.Text> : null}
                   </div>
                 ))}
               </div>
@@ -92,7 +92,7 @@ export function VendorsPage() {
             ),
           },
           {
-            title: 'Papers',
+            title: 'Certificates & insurance',
             render: (_, v) =>
               v.warnings.length ? (
                 <Tooltip title={v.warnings.join('; ')}><Tag color="error">{v.warnings.length} lapsed</Tag></Tooltip>

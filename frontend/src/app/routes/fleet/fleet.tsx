@@ -76,7 +76,7 @@ export function FleetPage() {
             { title: 'Length × width', render: (_, t) => `${formatFeetInches(t.lengthIn)} × ${formatFeetInches(t.widthIn)}` },
             { title: 'Tare', render: (_, t) => formatPounds(t.tareLb) },
             { title: 'Axles', render: (_, t) => t.axleOffsetsFt.length },
-            { title: 'Axle group', render: (_, t) => (t.slider ? `slides ${t.slider.minFromKingpinFt}–${t.slider.maxFromKingpinFt} ft, holes ${t.slider.holeSpacingIn} in` : `fixed at ${t.axleGroupFromKingpinFt} ft`) },
+            { title: 'Axle group (behind kingpin)', render: (_, t) => (t.slider ? `slides ${t.slider.minFromKingpinFt}–${t.slider.maxFromKingpinFt} ft, holes ${t.slider.holeSpacingIn} in` : `fixed at ${t.axleGroupFromKingpinFt} ft`) },
             ...(canEdit ? [{ title: '', render: (_: unknown, t: TrailerDto) => <Button size="small" onClick={() => setTrailer(t)}>Edit</Button> }] : []),
           ]}
         />

@@ -3,6 +3,9 @@ import { JURISDICTIONS, type RouteSegmentDto } from '@amberline/common';
 import { RouteMap } from '../../../components/route-map';
 
 const ROAD_LABELS: Record<string, string> = { 'two-lane': 'two-lane', multilane: 'multilane', interstate: 'interstate' };
+/** "Eastern Standard Time" rather than an IANA zone id, for the driver. */
+const zoneName = (timeZone: string) =>
+  new Intl.DateTimeFormat('en-US', { timeZone, timeZoneName: 'long' }).formatToParts(new Date()).find((p) => p.type === 'timeZoneName')?.value ?? timeZone;
 const stateName = (code: string) => JURISDICTIONS.find((j) => j.code === code)?.name ?? code;
 const STRIP_COLORS = ['#fde68a', '#bfdbfe', '#bbf7d0', '#fecaca', '#ddd6fe', '#fed7aa'];
 
@@ -79,7 +82,7 @@ export function RouteSection({ route }: { route: RouteSegmentDto[] }) {
                 {s.place ? ` · near ${s.place}` : ''}
               </Typography.Text>
               <div>
-                <Tag style={{ fontSize: 11, marginTop: 2 }}>{s.timeZone}</Tag>
+                <Tag style={{ fontSize: 11, marginTop: 2 }} title={s.timeZone}>{zoneName(s.timeZone)}</Tag>
               </div>
             </div>
           </li>
