@@ -59,6 +59,20 @@ describe('sign-in', () => {
     expect((await login(driver.email, driver.password)).status).toBe(401);
   });
 
+  it('applies a role change and a reactivation on the very next request (the session cache is dropped on change)', async () => {
+    const admin = await t.signedIn({ role: 'admin' });
+    const user = await t.signedIn({ role: 'dispatcher' });
+    const as = (path: string) => t.http().get(path).set('authorization', `Bearer ${user.token}`);
+    expect((await as('/api/moves')).status).toBe(200); // read once, so the user is now cached
+    await t.http().patch(`/api/users/${user.id}`).set('authorization', `Bearer ${admin.token}`).send({ role: 'driver' }).expect(200);
+    expect((await as('/api/auth/me')).body.role).toBe('driver');
+    expect((await as('/api/fleet/tractors')).status).toBe(403);
+    await t.http().patch(`/api/users/${user.id}`).set('authorization', `Bearer ${admin.token}`).send({ active: false }).expect(200);
+    expect((await as('/api/auth/me')).status).toBe(401);
+    await t.http().patch(`/api/users/${user.id}`).set('authorization', `Bearer ${admin.token}`).send({ active: true, role: 'dispatcher' }).expect(200);
+    expect((await as('/api/auth/me')).body.role).toBe('dispatcher');
+  });
+
   it('refuses a missing, malformed or forged token with 401', async () => {
     expect((await t.http().get('/api/auth/me')).status).toBe(401);
     expect((await t.http().get('/api/auth/me').set('authorization', 'Bearer nonsense')).status).toBe(401);

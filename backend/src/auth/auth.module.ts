@@ -1,3 +1,4 @@
+import { createSecretKey } from 'node:crypto';
 import { Module } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { APP_GUARD } from '@nestjs/core';
@@ -15,8 +16,11 @@ import { LoginThrottleService } from './login-throttle.service';
     JwtModule.registerAsync({
       inject: [ConfigService],
       useFactory: (config: ConfigService) => ({
-        secret: config.getOrThrow<string>('JWT_SECRET'),
-        signOptions: { expiresIn: config.get('JWT_EXPIRES_IN') ?? '12h' },
+        // a ready key object: given a string, the verifier first tries (and fails) to read it as a public key
+        // on every request, which cost about 0.7 ms of CPU per call
+        secret: createSecretKey(Buffer.from(config.getOrThrow<string>('JWT_SECRET'))),
+        signOptions: { expiresIn: config.get('JWT_EXPIRES_IN') ?? '12h', algorithm: 'HS256' },
+        verifyOptions: { algorithms: ['HS256'] },
       }),
     }),
   ],

@@ -43,7 +43,6 @@ export class AuthService {
     } catch {
       return null;
     }
-    const user = await this.users.findActiveById(payload.sub).catch(() => null);
-    return user ? { id: user.id, email: user.email, name: user.name, role: user.role } : null;
+    return this.users.sessionUser(payload.sub).catch(() => null);
   }
 }

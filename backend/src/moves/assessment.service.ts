@@ -1,4 +1,6 @@
+import { createHash } from 'node:crypto';
 import { Injectable } from '@nestjs/common';
+import { LRUCache } from 'lru-cache';
 import {
   defaultWll, PLANNING_CAUTION, planCheck, ANCHOR_KIND_LABELS,
   type AssessmentDto, type MoveArticle, type PlanArticle, type PlanCheckResult, type PlanInput, type RouteSegmentDto, type TiedownSpec,
@@ -53,18 +55,30 @@ export function resolveTiedown(t: MoveArticle['tiedowns'][number], trailer: Trai
 /** Runs the engine's full plan check on a move's facts with the current rulebook. */
 @Injectable()
 export class AssessmentService {
+  /**
+   * Results of the plan check by the SHA-256 of its whole input (plan, equipment, route, dates and the rule
+   * records themselves), so any change to any of them is a different key and nothing needs invalidating. The
+   * check is a pure function of that input; a move page, its assessment and its run sheet ask for the same one.
+   * Results are shared: callers only read and serialize them.
+   */
+  private readonly results = new LRUCache<string, PlanCheckResult>({ max: 2_000 });
+
   constructor(private readonly rulebook: RulebookService) {}
 
   async assess(facts: PlanFacts): Promise<{ result: PlanCheckResult; ruleVersions: Record<string, number> }> {
     const codes = [...new Set(facts.route.map((s) => s.jurisdiction))];
     const rules = await this.rulebook.currentRules(codes);
     const plan = this.toPlanInput(facts, [...rules.values()].map((r) => r.record));
-    let result: PlanCheckResult;
-    try {
-      result = planCheck(plan);
-    } catch (e) {
-      if (e instanceof RangeError) throw fieldError(e.message.split(/[\s:]/)[0] || 'plan', e.message);
-      throw e;
+    const key = createHash('sha256').update(JSON.stringify(plan)).digest('base64');
+    let result = this.results.get(key);
+    if (!result) {
+      try {
+        result = planCheck(plan);
+      } catch (e) {
+        if (e instanceof RangeError) throw fieldError(e.message.split(/[\s:]/)[0] || 'plan', e.message);
+        throw e;
+      }
+      this.results.set(key, result);
     }
     return { result, ruleVersions: Object.fromEntries([...rules].map(([c, r]) => [c, r.version])) };
   }

@@ -72,7 +72,14 @@ export class MovesService {
   /** Loads a move with its equipment and driver. Drivers may only see moves assigned to them. */
   async get(id: string, viewer?: SessionUser, manager?: EntityManager): Promise<Move> {
     const repo = manager ? manager.getRepository(Move) : this.moves;
-    const m = await repo.findOne({ where: { id }, relations: { tractor: true, trailer: true, driver: true } });
+    // one statement: findOne with relations would first run a DISTINCT id query, then the joined select
+    const m = await repo
+      .createQueryBuilder('m')
+      .leftJoinAndSelect('m.tractor', 'tractor')
+      .leftJoinAndSelect('m.trailer', 'trailer')
+      .leftJoinAndSelect('m.driver', 'driver')
+      .where('m.id = :id', { id })
+      .getOne();
     if (!m || (viewer?.role === 'driver' && m.driverId !== viewer.id)) throw new AppException(404, 'not_found', `No move ${id}`);
     return m;
   }
@@ -202,29 +209,43 @@ export class MovesService {
   }
 
   async list(q: ListMovesQuery, viewer: SessionUser): Promise<MovesPage> {
-    // the driver join is many-to-one, so one query with LIMIT/OFFSET pages correctly; the count runs without the join
+    // The desk's busiest call, so it is plain SQL: only the columns the list shows (the flags read out of the
+    // summary JSON and the dates formatted in SQL) and no entity hydration. The driver join is many-to-one, so
+    // LIMIT/OFFSET pages correctly. The total is a separate count, which PostgreSQL answers from the index alone
+    // (a window count would read every filtered row).
     const where: string[] = [];
-    const params: Record<string, unknown> = {};
-    if (q.stage) (where.push('m.stage = :stage'), (params.stage = q.stage));
-    if (q.jurisdiction) (where.push(':j = ANY(m.jurisdictions)'), (params.j = q.jurisdiction));
-    if (viewer.role === 'driver') (where.push('m.driver_id = :me'), (params.me = viewer.id));
+    const params: unknown[] = [];
+    const param = (v: unknown) => (params.push(v), `$${params.length}`);
+    if (q.stage) where.push(`m.stage = ${param(q.stage)}`);
+    if (q.jurisdiction) where.push(`${param(q.jurisdiction)} = ANY(m.jurisdictions)`);
+    if (viewer.role === 'driver') where.push(`m.driver_id = ${param(viewer.id)}`);
     if (q.search) {
-      where.push(`(m.reference || ' ' || m.customer || ' ' || m.commodity || ' ' || m.origin || ' ' || m.destination) ILIKE :s`);
-      params.s = `%${q.search.replace(/[%_\\]/g, '\\$&')}%`;
+      // the same expression as the trigram index moves_search_idx
+      where.push(`(m.reference || ' ' || m.customer || ' ' || m.commodity || ' ' || m.origin || ' ' || m.destination) ILIKE ${param(`%${q.search.replace(/[%_\\]/g, '\\$&')}%`)}`);
     }
-    const filtered = (qb: ReturnType<Repository<Move>['createQueryBuilder']>) => {
-      where.forEach((w, i) => (i === 0 ? qb.where(w, params) : qb.andWhere(w, params)));
-      return qb;
-    };
-    // only the columns the list shows (no plan JSON), mapped straight from rows
-    const rowsQb = filtered(this.moves.createQueryBuilder('m'))
-      .leftJoin('m.driver', 'd')
-      .select(['m.id', 'm.reference', 'm.customer', 'm.commodity', 'm.stage', 'm.origin', 'm.destination', 'm.requestedDeparture', 'm.jurisdictions', 'm.summary', 'm.updatedAt', 'd.id', 'd.name']);
-    if (q.sort === 'updated') rowsQb.orderBy('m.updated_at', 'DESC');
-    else rowsQb.orderBy('m.requested_departure', q.sort === '-departure' ? 'DESC' : 'ASC');
-    rowsQb.addOrderBy('m.id', 'ASC').offset((q.page - 1) * q.pageSize).limit(q.pageSize);
-    const [rows, total] = await Promise.all([rowsQb.getMany(), filtered(this.moves.createQueryBuilder('m')).getCount()]);
-    return { items: rows.map(toSummaryDto), total, page: q.page, pageSize: q.pageSize };
+    const whereSql = where.length ? `WHERE ${where.join(' AND ')}` : '';
+    const order = q.sort === 'updated' ? 'm.updated_at DESC, m.id' : `m.requested_departure ${q.sort === '-departure' ? 'DESC' : 'ASC'}, m.id`;
+    const n = params.length;
+    const [rows, [{ total }]] = await Promise.all([
+      this.ds.query(
+        `SELECT m.id, m.reference, m.customer, m.commodity, m.stage, m.origin, m.destination,
+                to_char(m.requested_departure, 'YYYY-MM-DD') AS "requestedDeparture", m.jurisdictions,
+                d.id AS "driverId", d.name AS "driverName",
+                coalesce(jsonb_array_length(m.summary->'permitsNeeded'), 0) AS "permitsNeeded",
+                coalesce((m.summary->>'escorts')::int, 0) AS escorts,
+                coalesce((m.summary->>'superload')::boolean, false) AS superload,
+                coalesce(jsonb_array_length(m.summary->'problems'), 0) AS problems,
+                coalesce((m.summary->>'overweight')::boolean, false) AS overweight,
+                to_char(m.updated_at AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"') AS "updatedAt"
+           FROM moves m LEFT JOIN users d ON d.id = m.driver_id
+          ${whereSql}
+          ORDER BY ${order}
+          LIMIT $${n + 1} OFFSET $${n + 2}`,
+        [...params, q.pageSize, (q.page - 1) * q.pageSize],
+      ) as Promise<MoveListRow[]>,
+      this.ds.query(`SELECT count(*)::int AS total FROM moves m ${whereSql}`, params) as Promise<{ total: number }[]>,
+    ]);
+    return { items: rows.map(toListItem), total, page: q.page, pageSize: q.pageSize };
   }
 
   async stageCounts(viewer: SessionUser): Promise<StageCounts> {
@@ -255,26 +276,22 @@ export class MovesService {
   }
 }
 
-export function toSummaryDto(m: Move): MoveSummaryDto {
-  const s = m.summary ?? ({} as Move['summary']);
+type MoveListRow = Pick<MoveSummaryDto, 'id' | 'reference' | 'customer' | 'commodity' | 'stage' | 'origin' | 'destination' | 'requestedDeparture' | 'jurisdictions' | 'updatedAt'>
+  & MoveSummaryDto['flags'] & { driverId: string | null; driverName: string | null };
+
+function toListItem(r: MoveListRow): MoveSummaryDto {
   return {
-    id: m.id,
-    reference: m.reference,
-    customer: m.customer,
-    commodity: m.commodity,
-    stage: m.stage,
-    origin: m.origin,
-    destination: m.destination,
-    requestedDeparture: m.requestedDeparture,
-    jurisdictions: m.jurisdictions,
-    driver: m.driver ? { id: m.driver.id, name: m.driver.name } : null,
-    flags: {
-      permitsNeeded: s.permitsNeeded?.length ?? 0,
-      escorts: s.escorts ?? 0,
-      superload: !!s.superload,
-      problems: s.problems?.length ?? 0,
-      overweight: !!s.overweight,
-    },
-    updatedAt: m.updatedAt.toISOString(),
+    id: r.id,
+    reference: r.reference,
+    customer: r.customer,
+    commodity: r.commodity,
+    stage: r.stage,
+    origin: r.origin,
+    destination: r.destination,
+    requestedDeparture: r.requestedDeparture,
+    jurisdictions: r.jurisdictions,
+    driver: r.driverId ? { id: r.driverId, name: r.driverName ?? '' } : null,
+    flags: { permitsNeeded: r.permitsNeeded, escorts: r.escorts, superload: r.superload, problems: r.problems, overweight: r.overweight },
+    updatedAt: r.updatedAt,
   };
 }

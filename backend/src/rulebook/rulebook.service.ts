@@ -96,7 +96,7 @@ export class RulebookService implements OnApplicationBootstrap {
   async currentRules(codes: string[]): Promise<Map<string, { record: JurisdictionRule; version: number }>> {
     if (!codes.length) return new Map();
     const rows: { code: string; version: number; record: JurisdictionRule }[] = await this.ds.query(
-      `SELECT v.code, v.version, v.record FROM jurisdictions j JOIN rule_versions v ON v.code = j.code AND v.version = j.current_version WHERE j.code = ANY($1)`,
+      `SELECT v.code, v.version, v.record FROM jurisdictions j JOIN rule_versions v ON v.code = j.code AND v.version = j.current_version WHERE j.code = ANY($1) ORDER BY v.code`,
       [codes],
     );
     return new Map(rows.map((r) => [r.code, { record: r.record, version: r.version }]));

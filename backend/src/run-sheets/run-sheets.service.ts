@@ -80,13 +80,20 @@ export class RunSheetsService implements OnModuleInit {
     const move = known?.move ?? (await this.load(moveId, viewer, manager));
     const assessment = known?.assessment ?? (await this.moves.assessmentOf(move, now, manager));
     const r = assessment.result;
-    const permits = (await Promise.all(this.sources.all().map((s) => s.permits?.(move, manager) ?? []))).flat();
-    const escorts = (await Promise.all(this.sources.all().map((s) => s.escorts?.(move, manager) ?? []))).flat();
-    const permitted = (await Promise.all(this.sources.all().map((s) => s.permittedDimensions?.(move, manager) ?? null))).find((p) => p) ?? null;
-    const fingerprint = this.fingerprint(move, permits, escorts);
-    const latest = await manager.findOne(DepartureChecks, { where: { moveId }, relations: { driver: true }, order: { submittedAt: 'DESC' } });
-    const ack = await manager.findOne(RunSheetAcknowledgement, { where: { moveId }, order: { acknowledgedAt: 'DESC' } });
+    const sources = this.sources.all();
+    const permits = (await Promise.all(sources.map((s) => s.permits?.(move, manager) ?? []))).flat();
+    const escorts = (await Promise.all(sources.map((s) => s.escorts?.(move, manager) ?? []))).flat();
+    const permitted = (await Promise.all(sources.map((s) => s.permittedDimensions?.(move, manager) ?? null))).find((p) => p) ?? null;
+    const latest = await manager
+      .createQueryBuilder(DepartureChecks, 'c')
+      .leftJoinAndSelect('c.driver', 'driver')
+      .where('c.moveId = :moveId', { moveId })
+      .orderBy('c.submittedAt', 'DESC')
+      .limit(1) // one statement (findOne with a relation adds a DISTINCT id query); the driver join is many-to-one
+      .getOne();
+    const ack = await manager.createQueryBuilder(RunSheetAcknowledgement, 'a').where('a.moveId = :moveId', { moveId }).orderBy('a.acknowledgedAt', 'DESC').limit(1).getOne();
     const trailer = move.trailer ?? (await manager.findOneByOrFail(Trailer, { id: move.trailerId }));
+    const fingerprint = this.fingerprint(move, permits, escorts);
     return {
       move: toMoveDto(move),
       fingerprint,

@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import * as bcrypt from 'bcryptjs';
+import { LRUCache } from 'lru-cache';
 import { Repository } from 'typeorm';
 import type { Page, SessionUser, UserDto } from '@amberline/common';
 import { AppException } from '../core/app-exception';
@@ -9,8 +10,18 @@ import { CreateUserDto, ListUsersQuery, toUserDto, UpdateUserDto } from './dto/u
 
 export const BCRYPT_COST = 12;
 
+/**
+ * How long a signed-in user's record is reused without asking the database again. Every change made through
+ * this service drops the user's entry at once, so in one server process a deactivation or a role change takes
+ * effect on the next request; another process (a second server behind a balancer) sees it within this time.
+ */
+export const SESSION_USER_TTL_MS = 5_000;
+
 @Injectable()
 export class UsersService {
+  /** Active users by id, for the check every authenticated request makes (see SESSION_USER_TTL_MS). */
+  private readonly sessionUsers = new LRUCache<string, SessionUser | false>({ max: 5_000, ttl: SESSION_USER_TTL_MS });
+
   constructor(@InjectRepository(User) private readonly users: Repository<User>) {}
 
   async list(q: ListUsersQuery): Promise<Page<UserDto>> {
@@ -35,7 +46,9 @@ export class UsersService {
       throw new AppException(409, 'conflict', 'You cannot deactivate yourself or remove your own admin role');
     }
     Object.assign(user, Object.fromEntries(Object.entries(dto).filter(([, v]) => v !== undefined)));
-    return toUserDto(await this.users.save(user));
+    const saved = await this.users.save(user);
+    this.sessionUsers.delete(id);
+    return toUserDto(saved);
   }
 
   async get(id: string): Promise<User> {
@@ -53,7 +66,13 @@ export class UsersService {
     return rows.map((u) => ({ id: u.id, name: u.name, email: u.email }));
   }
 
-  findActiveById(id: string): Promise<User | null> {
-    return this.users.findOneBy({ id, active: true });
+  /** The active user with this id as the session sees it, or null; cached briefly (see SESSION_USER_TTL_MS). */
+  async sessionUser(id: string): Promise<SessionUser | null> {
+    const hit = this.sessionUsers.get(id);
+    if (hit !== undefined) return hit || null;
+    const u = await this.users.findOneBy({ id, active: true });
+    const user: SessionUser | false = u ? { id: u.id, email: u.email, name: u.name, role: u.role } : false;
+    this.sessionUsers.set(id, user);
+    return user || null;
   }
 }
