@@ -244,6 +244,15 @@ describe('/api/permits', () => {
     expect(unknown.status).toBe(400);
     expect((await t.http().get('/api/permits').query({ sort: 'sideways' }).set(as('admin'))).status).toBe(400);
     expect((await t.http().get('/api/permits').query({ pageSize: 1000 }).set(as('admin'))).status).toBe(400);
+    expect((await t.http().get('/api/permits').query({ status: 'opened' }).set(as('admin'))).body.details[0].field).toBe('status');
+
+    // the desk's default view, open: an issued permit (state set directly here) leaves it but stays under "any status"
+    await t.ds.query(`UPDATE permits SET status = 'issued' WHERE id = $1`, [pl.id]);
+    const open = await t.http().get('/api/permits').query({ assignee: clerk.id, status: 'open' }).set(as('permit_clerk'));
+    expect(open.body.items.map((x: PermitSummaryDto) => x.id)).toEqual([ps.id]);
+    expect(open.body.total).toBe(1);
+    const any = await t.http().get('/api/permits').query({ assignee: clerk.id }).set(as('permit_clerk'));
+    expect(any.body.items.map((x: PermitSummaryDto) => x.id)).toEqual([ps.id, pl.id]);
   });
 
   describe('role matrix', () => {

@@ -35,7 +35,11 @@ async function main() {
     { name: 'floor (no work)', path: '/api/health/live' },
     { name: 'moves list (stage filter, page 3)', path: '/api/moves?stage=requested&sort=departure&page=3&pageSize=20', budget: true, list: true },
     { name: 'moves list (search)', path: '/api/moves?search=Harrowgate&sort=-departure&pageSize=20' },
-    ...(hasPermits ? [{ name: 'permit queue', path: '/api/permits?page=2&pageSize=20', budget: true }] : []),
+    // the desk opens on the open permits (to file, filed, rejected, needs amendment); "any status" adds the issued history
+    ...(hasPermits ? [
+      { name: 'permit queue (open, the desk default)', path: '/api/permits?status=open&sort=urgency&page=2&pageSize=20', budget: true },
+      { name: 'permit queue (any status)', path: '/api/permits?sort=urgency&page=2&pageSize=20' },
+    ] : []),
     { name: 'move page', path: `/api/moves/${move.id}`, budget: true },
     { name: 'assessment', path: `/api/moves/${move.id}/assessment` },
     { name: 'run sheet', path: `/api/moves/${move.id}/run-sheet`, budget: true },

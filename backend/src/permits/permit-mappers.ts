@@ -36,8 +36,12 @@ export type PermitRow = {
   payment_status: PaymentStatus | null;
 };
 
-/** Everything the queue shows of a permit, one row per permit, with its move, assignee, PDFs and payment. */
-export const PERMIT_SUMMARY_SQL = `
+/**
+ * Everything the queue shows of a permit, one row per permit, with its move, assignee, PDFs and payment. `permits`
+ * is the table, or a derived table of the permits wanted (a page picked on the permit's own columns first, so the
+ * joins and per-permit look-ups run for those rows only).
+ */
+export const permitSummarySql = (permits = 'permits') => `
   SELECT p.id, p.version, p.move_id, p.jurisdiction, p.permit_type, p.status, p.needed, p.permit_number, p.valid_from, p.valid_to,
          p.estimated_fee_cents, p.actual_fee_cents, p.lead_time_days, p.assignee_id, u.name AS assignee_name, p.amendment_reason,
          p.expiry_warning, p.updated_at, m.reference AS move_reference, m.stage AS move_stage, m.customer,
@@ -48,9 +52,10 @@ export const PERMIT_SUMMARY_SQL = `
            (SELECT 'succeeded' FROM permit_payments x WHERE x.permit_id = p.id AND x.status = 'succeeded' LIMIT 1),
            (SELECT x.status FROM permit_payments x WHERE x.permit_id = p.id ORDER BY x.attempt DESC LIMIT 1)
          ) AS payment_status
-    FROM permits p
+    FROM ${permits} p
     JOIN moves m ON m.id = p.move_id
     LEFT JOIN users u ON u.id = p.assignee_id`;
+export const PERMIT_SUMMARY_SQL = permitSummarySql();
 
 /** `now` gives today's date in the permit's own state for the urgency. */
 export function toSummaryDto(r: PermitRow, now: Date): PermitSummaryDto {

@@ -1,7 +1,7 @@
 import { Injectable, OnModuleInit } from '@nestjs/common';
 import { DataSource, EntityManager, In, Not } from 'typeorm';
 import {
-  canPermitTransition, PERMIT_STATUS_LABELS, PERMIT_STATUSES,
+  canPermitTransition, OPEN_PERMIT_STATUSES, PERMIT_STATUS_LABELS, PERMIT_STATUSES,
   type AssessmentDto, type AssignPermitsResponse, type PermitDto, type PermitOverviewDto, type PermitsPage, type PermitStatus, type PermitSummaryDto,
   type SessionUser, type SyncPermitsResponse, type UnmetCondition,
 } from '@amberline/common';
@@ -17,7 +17,7 @@ import { PermitDocument } from './entities/permit-document.entity';
 import { PermitPayment } from './entities/permit-payment.entity';
 import { PermitVersion } from './entities/permit-version.entity';
 import { Permit } from './entities/permit.entity';
-import { PERMIT_SUMMARY_SQL, snapshotOf, toDocumentDto, toPaymentDto, toSummaryDto, toVersionDto, type PermitRow } from './permit-mappers';
+import { PERMIT_SUMMARY_SQL, permitSummarySql, snapshotOf, toDocumentDto, toPaymentDto, toSummaryDto, toVersionDto, type PermitRow } from './permit-mappers';
 import { cents, factsFromAssessment, instantToLocal, localToInstant, permittedDifferences, travelSpan, zoneOf } from './permit-rules';
 
 /** Move stages in which permits still matter (the expiry scan and the lists look only at these). */
@@ -28,8 +28,8 @@ const SORTS: Record<string, string> = {
   urgency: `p.urgency_group, p.file_by ASC, p.departure ASC`,
   departure: 'p.departure ASC, p.jurisdiction ASC',
   '-departure': 'p.departure DESC, p.jurisdiction ASC',
-  jurisdiction: 'p.jurisdiction ASC, m.requested_departure ASC',
-  status: `array_position(ARRAY['to_file','needs_amendment','rejected','filed','issued','void']::varchar[], p.status), m.requested_departure ASC`,
+  jurisdiction: 'p.jurisdiction ASC, p.departure ASC',
+  status: `array_position(ARRAY['to_file','needs_amendment','rejected','filed','issued','void']::varchar[], p.status), p.departure ASC`,
   updated: 'p.updated_at DESC',
 };
 
@@ -66,7 +66,8 @@ export class PermitsService implements OnModuleInit {
       params.push(v);
       where.push(sql.replace('?', `$${params.length}`));
     };
-    if (q.status) add('p.status = ?', q.status);
+    if (q.status === 'open') where.push(`p.status IN (${OPEN_PERMIT_STATUSES.map((x) => `'${x}'`).join(',')})`);
+    else if (q.status) add('p.status = ?', q.status);
     else where.push(`p.status <> 'void'`);
     if (q.jurisdiction) add('p.jurisdiction = ?', q.jurisdiction);
     if (q.moveId) add('p.move_id = ?', q.moveId);
@@ -74,10 +75,11 @@ export class PermitsService implements OnModuleInit {
     else if (q.assignee) add('p.assignee_id = ?', q.assignee === 'me' ? viewer.id : q.assignee);
     const cond = where.length ? where.join(' AND ') : 'true';
     const [{ n }] = await this.ds.query(`SELECT count(*)::int AS n FROM permits p WHERE ${cond}`, params);
-    // pick the page's ids on the bare columns first, so the per-permit document and payment look-ups run for 20 rows, not all
+    // the page is picked on the permit's own columns (filters and sort keys all live on the permit row, the move's
+    // departure kept there by trigger), then joined, so the per-permit document and payment look-ups run for 20 rows
     const order = `${SORTS[q.sort] ?? SORTS.urgency}, p.id`;
-    const page = `SELECT p.id FROM permits p JOIN moves m ON m.id = p.move_id WHERE ${cond} ORDER BY ${order} LIMIT ${q.pageSize} OFFSET ${(q.page - 1) * q.pageSize}`;
-    const rows = await this.rows(`p.id IN (${page})`, params, undefined, `ORDER BY ${order}`);
+    const page = `(SELECT * FROM permits p WHERE ${cond} ORDER BY ${order} LIMIT ${q.pageSize} OFFSET ${(q.page - 1) * q.pageSize})`;
+    const rows: PermitRow[] = await this.ds.query(`${permitSummarySql(page)} ORDER BY ${order}`, params);
     return { items: rows.map((r) => toSummaryDto(r, now)), total: n, page: q.page, pageSize: q.pageSize };
   }
 

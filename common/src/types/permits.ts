@@ -14,6 +14,12 @@ export const PERMIT_STATUS_LABELS: Record<PermitStatus, string> = {
   void: 'Void',
 };
 
+/** The statuses that still ask something of the permit desk: the queue shows these unless told otherwise. */
+export const OPEN_PERMIT_STATUSES = ['to_file', 'filed', 'rejected', 'needs_amendment'] as const satisfies readonly PermitStatus[];
+
+/** What the queue's status filter takes: one status, every open one, or (absent) every status but void. */
+export type PermitQueueStatus = PermitStatus | 'open';
+
 /** Which status may follow which. `needs_amendment` is also set by the server when the plan changes. */
 export const PERMIT_TRANSITIONS: Record<PermitStatus, readonly PermitStatus[]> = {
   to_file: ['filed', 'void'],
@@ -237,7 +243,8 @@ export type PermitSort = (typeof PERMIT_SORTS)[number];
 export type PermitsQuery = {
   page?: number;
   pageSize?: number;
-  status?: PermitStatus;
+  /** One status, `open` for every open one (OPEN_PERMIT_STATUSES); absent for all but void. */
+  status?: PermitQueueStatus;
   jurisdiction?: string;
   /** A user id, `me` or `none`. */
   assignee?: string;

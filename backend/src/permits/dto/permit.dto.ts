@@ -4,7 +4,7 @@ import {
 } from 'class-validator';
 import {
   LIMITS, PAYMENT_STATUSES, PERMIT_SORTS, PERMIT_STATUSES, PERMIT_TYPES,
-  type AssignPermitsRequest, type PaymentStatus, type PayPermitRequest, type PermitConditions, type PermitSort, type PermitStatus, type PermitType, type UpdatePermitRequest,
+  type AssignPermitsRequest, type PaymentStatus, type PayPermitRequest, type PermitConditions, type PermitQueueStatus, type PermitSort, type PermitStatus, type PermitType, type UpdatePermitRequest,
 } from '@amberline/common';
 
 const LOCAL_DATE_TIME = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/;
@@ -44,7 +44,7 @@ export class UpdatePermitDto implements UpdatePermitRequest {
 export class ListPermitsQuery {
   @IsOptional() @Type(() => Number) @IsInt() @Min(1) page = 1;
   @IsOptional() @Type(() => Number) @IsInt() @Min(1) @Max(LIMITS.pageSizeMax) pageSize = 20;
-  @IsOptional() @IsIn(PERMIT_STATUSES as unknown as string[], { message: `status must be one of ${PERMIT_STATUSES.join(', ')}` }) status?: PermitStatus;
+  @IsOptional() @IsIn(['open', ...PERMIT_STATUSES], { message: `status must be open or one of ${PERMIT_STATUSES.join(', ')}` }) status?: PermitQueueStatus;
   @IsOptional() @Matches(/^[A-Z]{2}$/, { message: 'jurisdiction must be a two-letter state code' }) jurisdiction?: string;
   @IsOptional() @Matches(/^(me|none|[0-9a-f-]{36})$/i, { message: 'assignee must be a user id, me or none' }) assignee?: string;
   @IsOptional() @IsUUID('4', { message: 'moveId must be the id of a move' }) moveId?: string;

@@ -4,7 +4,7 @@ import type { SortOrder } from 'antd/es/table/interface';
 import { Link } from 'react-router-dom';
 import {
   JURISDICTIONS, PERMIT_STATUS_LABELS, PERMIT_STATUSES, PERMIT_TYPE_LABELS,
-  type PermitSort, type PermitStatus, type PermitSummaryDto,
+  type PermitQueueStatus, type PermitSort, type PermitSummaryDto,
 } from '@amberline/common';
 import { Caution } from '../../../components/caution';
 import { to } from '../../../config/paths';
@@ -43,7 +43,7 @@ export function PermitDeskPage() {
   const { message } = App.useApp();
   const { user } = useAuth();
   const canWork = accessFor(user?.role).canWorkPermits;
-  const [filter, setFilter] = useState<PermitsFilter>({ page: 1, pageSize: 20, sort: 'urgency' });
+  const [filter, setFilter] = useState<PermitsFilter>({ page: 1, pageSize: 20, sort: 'urgency', status: 'open' });
   const [selected, setSelected] = useState<string[]>([]);
   const [bulkAssignee, setBulkAssignee] = useState<string | null | undefined>(undefined);
   const [open, setOpen] = useState<string | null>(null);
@@ -77,7 +77,7 @@ export function PermitDeskPage() {
       <Row gutter={[12, 12]} style={{ marginBottom: 12 }} data-testid="permit-counters">
         {PERMIT_STATUSES.filter((s) => s !== 'void').map((s) => (
           <Col key={s} xs={12} sm={8} md={4}>
-            <Card size="small" hoverable onClick={() => set({ status: filter.status === s ? undefined : s })} style={filter.status === s ? { borderColor: '#d97706' } : undefined}>
+            <Card size="small" hoverable onClick={() => set({ status: filter.status === s ? 'open' : s })} style={filter.status === s ? { borderColor: '#d97706' } : undefined}>
               <Statistic title={PERMIT_STATUS_LABELS[s]} value={overview.data?.counts[s] ?? 0} />
             </Card>
           </Col>
@@ -103,7 +103,15 @@ export function PermitDeskPage() {
       </Row>
 
       <Space wrap style={{ marginBottom: 12 }}>
-        <Select allowClear placeholder="Any status" style={{ width: 170 }} value={filter.status} onChange={(status?: PermitStatus) => set({ status })} options={PERMIT_STATUSES.map((s) => ({ value: s, label: PERMIT_STATUS_LABELS[s] }))} aria-label="Status filter" />
+        <Select
+          allowClear
+          placeholder="Any status"
+          style={{ width: 190 }}
+          value={filter.status}
+          onChange={(status?: PermitQueueStatus) => set({ status })}
+          options={[{ value: 'open', label: 'Open (not yet issued)' }, ...PERMIT_STATUSES.map((s) => ({ value: s, label: PERMIT_STATUS_LABELS[s] }))]}
+          aria-label="Status filter"
+        />
         <Select allowClear showSearch placeholder="Any state" style={{ width: 170 }} value={filter.jurisdiction} onChange={(jurisdiction?: string) => set({ jurisdiction })} optionFilterProp="label" options={JURISDICTIONS.map((j) => ({ value: j.code, label: `${j.code} ${j.name}` }))} aria-label="State filter" />
         <Select allowClear showSearch placeholder="Anyone" style={{ width: 200 }} value={filter.assignee} onChange={(assignee?: string) => set({ assignee })} optionFilterProp="label" options={[{ value: 'me', label: 'Assigned to me' }, { value: 'none', label: 'Unassigned' }, ...people]} aria-label="Assignee filter" />
       </Space>
