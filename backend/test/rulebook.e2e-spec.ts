@@ -1,4 +1,6 @@
 import { JURISDICTIONS, SAMPLE_RULE_TX, type Role } from '@amberline/common';
+import { seedTractor, seedTrailer } from '@amberline/seed';
+import { texasMove } from './fixtures/moves';
 import { createTestApp, type TestApp } from './utils/create-test-app';
 
 describe('/api/rulebook', () => {
@@ -37,6 +39,26 @@ describe('/api/rulebook', () => {
     expect(versions.map((v: { version: number }) => v.version).slice(0, 2)).toEqual([before.version + 1, before.version]);
     expect(versions[0].note).toBe('lead time checked with the state');
     expect(versions[1].record.permit.leadTimeDays).toBe(before.record.permit.leadTimeDays);
+  });
+
+  it('a saved move\'s assessment follows a rule edit at once (results are keyed by rule version, not kept stale)', async () => {
+    const tractorId = (await seedTractor(t.ds)).id;
+    const trailerId = (await seedTrailer(t.ds)).id;
+    const okMove = texasMove(tractorId, trailerId, {
+      route: [{ order: 1, jurisdiction: 'OK', roads: 'I-35 N', miles: 120, roadType: 'interstate', zip: '73102' }],
+      origin: 'Ardmore, OK', destination: 'Oklahoma City, OK',
+    });
+    const move = (await t.http().post('/api/moves').set(as('dispatcher')).send(okMove).expect(201)).body;
+    const okOf = async () => {
+      const a = (await t.http().get(`/api/moves/${move.id}/assessment`).set(as('dispatcher')).expect(200)).body;
+      return { version: a.ruleVersions.OK, leadTime: a.result.jurisdictions.find((j: { code: string }) => j.code === 'OK').permit.leadTimeDays };
+    };
+    const first = await okOf();
+    expect(await okOf()).toEqual(first); // asked twice, the same answer
+    const current = (await t.http().get('/api/rulebook/jurisdictions/OK').set(as('admin'))).body;
+    const record = { ...current.record, permit: { ...current.record.permit, leadTimeDays: current.record.permit.leadTimeDays + 3 } };
+    await t.http().put('/api/rulebook/jurisdictions/OK').set(as('admin')).send({ record, note: 'lead time per the state' }).expect(200);
+    expect(await okOf()).toEqual({ version: current.version + 1, leadTime: current.record.permit.leadTimeDays + 3 });
   });
 
   it.each([

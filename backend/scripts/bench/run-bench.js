@@ -29,7 +29,15 @@ async function main() {
   const [disp] = (await db.query(`SELECT email FROM users WHERE role = 'dispatcher' AND email LIKE 'dispatcher.1@large%'`)).rows;
   const login = { email: disp.email, password: 'bench-password' };
   const { accessToken: token } = await api('/api/auth/login', null, { method: 'POST', body: JSON.stringify(login) });
-  const [move] = (await db.query(`SELECT id FROM moves WHERE stage = 'escorts_booked' AND reference LIKE 'AM-L-%' ORDER BY reference LIMIT 1`)).rows;
+  // a move as a driver meets it before departure: the most issued permits (each with its PDF) and a confirmed escort
+  const [move] = (await db.query(
+    `SELECT m.id, m.reference, (SELECT count(*)::int FROM permits p WHERE p.move_id = m.id AND p.status = 'issued') AS permits,
+            (SELECT count(*)::int FROM escort_bookings b WHERE b.move_id = m.id) AS bookings
+       FROM moves m
+      WHERE m.stage = 'escorts_booked' AND m.reference LIKE 'AM-L-%'
+        AND EXISTS (SELECT 1 FROM escort_bookings b WHERE b.move_id = m.id AND b.status = 'confirmed')
+      ORDER BY 3 DESC, m.reference LIMIT 1`,
+  )).rows;
   const hasPermits = (await db.query(`SELECT to_regclass('public.permits') AS t`)).rows[0].t !== null;
   const routes = [
     { name: 'floor (no work)', path: '/api/health/live' },
@@ -133,14 +141,15 @@ async function main() {
   budgets.push(['engine full plan check p50 ≤ 2 ms', p50 <= 2, `${p50} ms`]);
 
   const counts = (await db.query(`SELECT (SELECT count(*) FROM moves)::int AS moves, (SELECT count(*) FROM users)::int AS users,
-    ${hasPermits ? '(SELECT count(*) FROM permits)::int' : '0'} AS permits,
+    ${hasPermits ? '(SELECT count(*) FROM permits)::int' : '0'} AS permits, ${hasPermits ? '(SELECT count(*) FROM permit_documents)::int' : '0'} AS documents,
     (CASE WHEN to_regclass('public.escort_bookings') IS NULL THEN 0 ELSE (SELECT count(*) FROM escort_bookings)::int END) AS bookings`)).rows[0];
   await db.end();
 
   const lines = [];
   lines.push('# Benchmark results', '');
   lines.push(`Run ${new Date().toISOString()} on ${os.cpus().length} × ${os.cpus()[0].model}, ${Math.round(os.totalmem() / 2 ** 30)} GiB, Node ${process.version}, PostgreSQL on loopback; ${DURATION} s per cell (autocannon).`);
-  lines.push(`Dataset: ${counts.moves} moves, ${counts.permits} permits, ${counts.bookings} escort bookings, ${counts.users} users; seeded in ${(Number(process.env.SEED_MS || 0) / 1000).toFixed(1)} s.`, '');
+  lines.push(`Dataset: ${counts.moves} moves, ${counts.permits} permits (${counts.documents} permit PDFs), ${counts.bookings} escort bookings, ${counts.users} users; seeded in ${(Number(process.env.SEED_MS || 0) / 1000).toFixed(1)} s.`);
+  lines.push(`Move page, assessment and run sheet: ${move.reference}, escorts booked, ${move.permits} issued permits with PDFs, ${move.bookings} escort booking(s).`, '');
   lines.push('| route | conns | req/s | p50 ms | p95 ms | p99 ms | errors | × floor p95 | SQL/req |', '| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |');
   for (const r of results) for (const c of CONNECTIONS) {
     const x = r.byConn[c];

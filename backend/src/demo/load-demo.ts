@@ -114,7 +114,7 @@ function hash(s: string): number {
 const addDays = (d: string, n: number) => new Date(Date.parse(`${d}T00:00:00Z`) + n * 86_400_000).toISOString().slice(0, 10);
 
 /** A one-page stand-in for the state's permit PDF, clearly marked as demo data. */
-function demoPermitPdf(number: string, reference: string, state: string): Promise<{ buffer: Buffer; size: number }> {
+export function demoPermitPdf(number: string, reference: string, state: string): Promise<{ buffer: Buffer; size: number }> {
   return new Promise((resolve) => {
     const doc = new PDFDocument({ size: 'LETTER', margin: 60 });
     const chunks: Buffer[] = [];

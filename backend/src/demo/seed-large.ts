@@ -7,10 +7,15 @@ import { DEMO_MOVES, DEMO_TRACTORS, DEMO_TRAILERS, demoDeparture, seedTractor, s
 import { AppModule } from '../app.module';
 import { CreateMoveDto } from '../moves/dto/move.dto';
 import { MovesService } from '../moves/moves.service';
+import { FILE_STORE, type FileStore } from '../permits/storage/file-store';
+import { demoPermitPdf } from './load-demo';
 
 export const LARGE = { moves: 10_000, bookings: 5_000, vendors: 20, users: { driver: 150, dispatcher: 30, permit_clerk: 15, admin: 5 } } as const;
 
-/** Long-haul templates through four or five states (invented customers), so the permit desk holds several permits per move. */
+/**
+ * Long-haul templates through four or five states (invented customers), so the permit desk holds several permits
+ * per move (about four on average over the dataset).
+ */
 const excavator = DEMO_MOVES[0];
 const LONG_HAULS: DemoMove[] = [
   { ...excavator, key: 'long-plains', customer: 'Harrowgate Mining', origin: 'Katy, TX', destination: 'Grand Island, NE', departure: 14, travelDays: 4,
@@ -34,6 +39,22 @@ const LONG_HAULS: DemoMove[] = [
       { order: 3, jurisdiction: 'SC', roads: 'I-95 N', miles: 198, roadType: 'interstate', zip: '29501' },
       { order: 4, jurisdiction: 'NC', roads: 'I-95 N', miles: 182, roadType: 'interstate', zip: '27801' },
       { order: 5, jurisdiction: 'VA', roads: 'I-95 N', miles: 90, roadType: 'interstate', zip: '23219' },
+    ] },
+  { ...DEMO_MOVES[2], key: 'long-gulf', customer: 'Larkspur Bridge & Iron', origin: 'Baytown, TX', destination: 'Atlanta, GA', departure: 18, travelDays: 4,
+    route: [
+      { order: 1, jurisdiction: 'TX', roads: 'I-10 E', miles: 120, roadType: 'interstate', zip: '77002' },
+      { order: 2, jurisdiction: 'LA', roads: 'I-10 E, I-12 E', miles: 300, roadType: 'interstate', zip: '70601' },
+      { order: 3, jurisdiction: 'MS', roads: 'I-10 E', miles: 80, roadType: 'interstate', zip: '39501' },
+      { order: 4, jurisdiction: 'AL', roads: 'I-65 N, I-85 N', miles: 270, roadType: 'interstate', zip: '36602' },
+      { order: 5, jurisdiction: 'GA', roads: 'I-85 N', miles: 85, roadType: 'interstate', zip: '30303' },
+    ] },
+  { ...excavator, key: 'long-national-road', customer: 'Ridgeback Stamping Works', origin: 'Kansas City, MO', destination: 'Washington, PA', departure: 22, travelDays: 4,
+    route: [
+      { order: 1, jurisdiction: 'MO', roads: 'I-70 E', miles: 250, roadType: 'interstate', zip: '64106' },
+      { order: 2, jurisdiction: 'IL', roads: 'I-70 E', miles: 160, roadType: 'interstate', zip: '62401' },
+      { order: 3, jurisdiction: 'IN', roads: 'I-70 E', miles: 155, roadType: 'interstate', zip: '46204' },
+      { order: 4, jurisdiction: 'OH', roads: 'I-70 E', miles: 225, roadType: 'interstate', zip: '43215' },
+      { order: 5, jurisdiction: 'PA', roads: 'I-70 E', miles: 35, roadType: 'interstate', zip: '15301' },
     ] },
 ];
 
@@ -93,7 +114,7 @@ export async function seedLarge(now = new Date()): Promise<string> {
                 t.tractor_id, t.trailer_id, ($2::uuid[])[1 + g % array_length($2::uuid[], 1)], t.slider_setting_ft, t.articles, t.route,
                 t.jurisdictions, t.origin, t.destination, (current_date - 365 + (g * 73) % 730), t.travel_days, NULL, t.summary, $3, now(), now()
            FROM generate_series(1, $1::int) g
-           JOIN moves t ON t.id = ($4::uuid[])[1 + CASE WHEN g % 3 = 0 THEN g % $5 ELSE $5 + g % $6 END]`,
+           JOIN moves t ON t.id = ($4::uuid[])[1 + CASE WHEN g % 5 = 0 THEN g % $5 ELSE $5 + (g - g / 5 - 1) % $6 END]`,
         [copies, drivers, dispatcher.id, templates, DEMO_MOVES.length, LONG_HAULS.length],
       );
       await m.query(
@@ -125,6 +146,15 @@ export async function seedLarge(now = new Date()): Promise<string> {
         WHERE m.reference LIKE 'AM-L-%' AND (m.summary->'permitsNeeded') ? j.code`,
       [clerks],
     );
+    // each issued permit carries its PDF: one stand-in file in the store, a document row per permit
+    const pdf = await demoPermitPdf('BENCH-SAMPLE', 'AM-L', 'any');
+    const stored = await app.get<FileStore>(FILE_STORE).put(pdf.buffer);
+    await ds.query(
+      `INSERT INTO permit_documents (permit_id, version, file_name, sha256, size_bytes, storage_key, uploaded_by)
+       SELECT p.id, 1, p.permit_number || '.pdf', $1, $2, $3, p.assignee_id FROM permits p
+        WHERE p.status = 'issued' AND p.permit_number IS NOT NULL AND NOT EXISTS (SELECT 1 FROM permit_documents d WHERE d.permit_id = p.id)`,
+      [stored.sha256, pdf.size, stored.key],
+    );
     // escort bookings for moves whose assessment asks for escorts, with invented vendors
     const vendors: string[] = [];
     for (let i = 0; i < LARGE.vendors; i++) vendors.push((await seedVendor(ds, { company: `Bench Escort Co ${i + 1} ${tag}`, states: ['TX', 'OK', 'KS', 'NE', 'VA', 'MD', 'PA', 'NY', 'FL', 'GA', 'SC', 'NC', 'WA'] })).id);
@@ -140,8 +170,9 @@ export async function seedLarge(now = new Date()): Promise<string> {
       [vendors, dispatcher.id, LARGE.bookings],
     );
     await ds.query('ANALYZE');
-    const [c] = await ds.query(`SELECT (SELECT count(*) FROM moves)::int AS moves, (SELECT count(*) FROM permits)::int AS permits, (SELECT count(*) FROM escort_bookings)::int AS bookings`);
-    return `${users.length} users, 40 tractors, 60 trailers, ${LARGE.vendors} vendors, ${c.moves} moves, ${c.permits} permits, ${c.bookings} escort bookings in ${((Date.now() - started) / 1000).toFixed(1)} s`;
+    const [c] = await ds.query(`SELECT (SELECT count(*) FROM moves)::int AS moves, (SELECT count(*) FROM permits)::int AS permits,
+      (SELECT count(*) FROM permit_documents)::int AS documents, (SELECT count(*) FROM escort_bookings)::int AS bookings`);
+    return `${users.length} users, 40 tractors, 60 trailers, ${LARGE.vendors} vendors, ${c.moves} moves, ${c.permits} permits (${c.documents} PDFs), ${c.bookings} escort bookings in ${((Date.now() - started) / 1000).toFixed(1)} s`;
   } finally {
     await app.close();
   }

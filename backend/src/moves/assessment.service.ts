@@ -56,8 +56,9 @@ export function resolveTiedown(t: MoveArticle['tiedowns'][number], trailer: Trai
 @Injectable()
 export class AssessmentService {
   /**
-   * Results of the plan check by the SHA-256 of its whole input (plan, equipment, route, dates and the rule
-   * records themselves), so any change to any of them is a different key and nothing needs invalidating. The
+   * Results of the plan check by the SHA-256 of its whole input (plan, equipment, route, dates, and the rule
+   * records by their immutable version ids), so any change to any of them is a different key and nothing needs
+   * invalidating. The
    * check is a pure function of that input; a move page, its assessment and its run sheet ask for the same one.
    * Results are shared: callers only read and serialize them.
    */
@@ -69,7 +70,8 @@ export class AssessmentService {
     const codes = [...new Set(facts.route.map((s) => s.jurisdiction))];
     const rules = await this.rulebook.currentRules(codes);
     const plan = this.toPlanInput(facts, [...rules.values()].map((r) => r.record));
-    const key = createHash('sha256').update(JSON.stringify(plan)).digest('base64');
+    // rule records are immutable per version row, so their ids stand for them in the key
+    const key = createHash('sha256').update(JSON.stringify({ ...plan, rules: [...rules.values()].map((r) => r.id) })).digest('base64');
     let result = this.results.get(key);
     if (!result) {
       try {

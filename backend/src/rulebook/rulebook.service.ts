@@ -1,5 +1,6 @@
 import { Injectable, Logger, OnApplicationBootstrap } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
+import { LRUCache } from 'lru-cache';
 import { DataSource, Repository } from 'typeorm';
 import {
   assessJurisdiction, FEDERAL_DEFAULT_RULE, validateJurisdictionRule, JURISDICTIONS, jurisdictionByCode, SAMPLE_RULES,
@@ -49,6 +50,9 @@ export function checkRuleRecord(code: string, r: JurisdictionRule): void {
 @Injectable()
 export class RulebookService implements OnApplicationBootstrap {
   private readonly logger = new Logger('Rulebook');
+  /** Rule records by rule-version id (immutable rows; see currentRules). */
+  private readonly records = new LRUCache<string, JurisdictionRule>({ max: 200 });
+
   constructor(
     private readonly ds: DataSource,
     private readonly audit: AuditService,
@@ -93,13 +97,31 @@ export class RulebookService implements OnApplicationBootstrap {
   }
 
   /** Current records for the given codes, with their versions. Unknown codes are left out. */
-  async currentRules(codes: string[]): Promise<Map<string, { record: JurisdictionRule; version: number }>> {
+  /**
+   * The current rule record of each jurisdiction. A rule version row is never changed once written (a change is a
+   * new version), so records are kept here by the row's id and the database sends only those not yet held.
+   */
+  async currentRules(codes: string[]): Promise<Map<string, { id: string; record: JurisdictionRule; version: number }>> {
     if (!codes.length) return new Map();
-    const rows: { code: string; version: number; record: JurisdictionRule }[] = await this.ds.query(
-      `SELECT v.code, v.version, v.record FROM jurisdictions j JOIN rule_versions v ON v.code = j.code AND v.version = j.current_version WHERE j.code = ANY($1) ORDER BY v.code`,
-      [codes],
+    const rows: { id: string; code: string; version: number; record: JurisdictionRule | null }[] = await this.ds.query(
+      `SELECT v.id, v.code, v.version, CASE WHEN v.id = ANY($2::uuid[]) THEN NULL ELSE v.record END AS record
+         FROM jurisdictions j JOIN rule_versions v ON v.code = j.code AND v.version = j.current_version
+        WHERE j.code = ANY($1) ORDER BY v.code`,
+      [codes, [...this.records.keys()]],
     );
-    return new Map(rows.map((r) => [r.code, { record: r.record, version: r.version }]));
+    const out = new Map<string, { id: string; record: JurisdictionRule; version: number }>();
+    for (const r of rows) {
+      // a record evicted between the key list and this line is simply read again next time
+      const record = r.record ?? this.records.get(r.id) ?? (await this.recordById(r.id));
+      this.records.set(r.id, record);
+      out.set(r.code, { id: r.id, record, version: r.version });
+    }
+    return out;
+  }
+
+  private async recordById(id: string): Promise<JurisdictionRule> {
+    const [row] = await this.ds.query(`SELECT record FROM rule_versions WHERE id = $1`, [id]);
+    return row.record;
   }
 
   async update(codeRaw: string, record: JurisdictionRule, note: string, actor: SessionUser): Promise<RuleVersionDto> {
