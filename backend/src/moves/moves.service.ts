@@ -5,6 +5,7 @@ import {
   MOVE_STAGES, type AssessmentDto, type HistoryEntryDto, type MoveDto, type MoveStage, type MoveSummaryDto, type MovesPage, type SessionUser, type StageCounts,
 } from '@amberline/common';
 import { AuditService, diff } from '../audit/audit.service';
+import { entityColumns, entityFromRow, preparedQuery } from '../database/prepared';
 import { AppException, fieldError } from '../core/app-exception';
 import { Tractor } from '../fleet/entities/tractor.entity';
 import { Trailer } from '../fleet/entities/trailer.entity';
@@ -71,16 +72,28 @@ export class MovesService {
 
   /** Loads a move with its equipment and driver. Drivers may only see moves assigned to them. */
   async get(id: string, viewer?: SessionUser, manager?: EntityManager): Promise<Move> {
-    const repo = manager ? manager.getRepository(Move) : this.moves;
-    // one statement: findOne with relations would first run a DISTINCT id query, then the joined select
-    const m = await repo
-      .createQueryBuilder('m')
-      .leftJoinAndSelect('m.tractor', 'tractor')
-      .leftJoinAndSelect('m.trailer', 'trailer')
-      .leftJoinAndSelect('m.driver', 'driver')
-      .where('m.id = :id', { id })
-      .getOne();
+    const [row] = await preparedQuery<Record<string, unknown>>(manager ?? this.ds, this.getSql(), [id]);
+    const m = row ? this.fromRow(row) : null;
     if (!m || (viewer?.role === 'driver' && m.driverId !== viewer.id)) throw new AppException(404, 'not_found', `No move ${id}`);
+    return m;
+  }
+
+  /** The move with its equipment and driver in one prepared statement (the move page's and run sheet's read). */
+  private getSql = (): string =>
+    (this.getSqlText ??= (() => {
+      const meta = (e: Function) => this.ds.getMetadata(e);
+      return `SELECT ${entityColumns(meta(Move), 'm')}, ${entityColumns(meta(Tractor), 't', 'tractor.')}, ${entityColumns(meta(Trailer), 'r', 'trailer.')},
+                     ${entityColumns(meta(User), 'd', 'driver.')}
+                FROM moves m JOIN tractors t ON t.id = m.tractor_id JOIN trailers r ON r.id = m.trailer_id LEFT JOIN users d ON d.id = m.driver_id
+               WHERE m.id = $1`;
+    })());
+  private getSqlText?: string;
+
+  private fromRow(row: Record<string, unknown>): Move {
+    const m = entityFromRow<Move>(this.ds.getMetadata(Move), row)!;
+    m.tractor = entityFromRow<Tractor>(this.ds.getMetadata(Tractor), row, 'tractor.') ?? undefined;
+    m.trailer = entityFromRow<Trailer>(this.ds.getMetadata(Trailer), row, 'trailer.') ?? undefined;
+    m.driver = entityFromRow<User>(this.ds.getMetadata(User), row, 'driver.');
     return m;
   }
 
@@ -227,7 +240,8 @@ export class MovesService {
     const order = q.sort === 'updated' ? 'm.updated_at DESC, m.id' : `m.requested_departure ${q.sort === '-departure' ? 'DESC' : 'ASC'}, m.id`;
     const n = params.length;
     const [rows, [{ total }]] = await Promise.all([
-      this.ds.query(
+      preparedQuery<MoveListRow>(
+        this.ds,
         `SELECT m.id, m.reference, m.customer, m.commodity, m.stage, m.origin, m.destination,
                 to_char(m.requested_departure, 'YYYY-MM-DD') AS "requestedDeparture", m.jurisdictions,
                 d.id AS "driverId", d.name AS "driverName",
@@ -242,8 +256,8 @@ export class MovesService {
           ORDER BY ${order}
           LIMIT $${n + 1} OFFSET $${n + 2}`,
         [...params, q.pageSize, (q.page - 1) * q.pageSize],
-      ) as Promise<MoveListRow[]>,
-      this.ds.query(`SELECT count(*)::int AS total FROM moves m ${whereSql}`, params) as Promise<{ total: number }[]>,
+      ),
+      preparedQuery<{ total: number }>(this.ds, `SELECT count(*)::int AS total FROM moves m ${whereSql}`, params),
     ]);
     return { items: rows.map(toListItem), total, page: q.page, pageSize: q.pageSize };
   }

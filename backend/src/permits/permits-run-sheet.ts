@@ -1,15 +1,15 @@
 import { Injectable, OnModuleInit } from '@nestjs/common';
-import { In, Not, type EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import { PERMIT_STATUS_LABELS, type RunSheetPermit } from '@amberline/common';
 import { travelDates } from '../moves/assessment.service';
+import { preparedQuery } from '../database/prepared';
 import type { Move } from '../moves/entities/move.entity';
 import { RunSheetSourcesRegistry, type RunSheetSource } from '../run-sheets/run-sheet-sources';
-import { PermitDocument } from './entities/permit-document.entity';
 import { Permit } from './entities/permit.entity';
 import { instantToLocal, travelSpan, zoneOf } from './permit-rules';
 
 /** Plain lines for the permit's structured conditions, as the driver reads them. */
-function conditionLines(p: Permit): string[] {
+function conditionLines(p: Pick<Permit, 'conditions' | 'conditionsText' | 'routeText'>): string[] {
   const c = p.conditions ?? {};
   const out: string[] = [];
   if (c.escortsFront || c.escortsRear) out.push(`escorts: ${c.escortsFront ?? 0} front, ${c.escortsRear ?? 0} rear`);
@@ -23,18 +23,34 @@ function conditionLines(p: Permit): string[] {
   return out;
 }
 
+type RunSheetPermitRow = Pick<
+  Permit,
+  'id' | 'jurisdiction' | 'status' | 'permitNumber' | 'validFrom' | 'validTo' | 'permitted' | 'conditions' | 'conditionsText' | 'routeText' | 'amendmentReason' | 'expiryWarning'
+> & { documentId: string | null };
+
 /** Gives the driver's run sheet the move's permits (number, validity, conditions, PDF) and the permitted dimensions. */
 @Injectable()
 export class PermitsRunSheetSource implements RunSheetSource, OnModuleInit {
   readonly name = 'permits';
   /** One read of a move's permits per run-sheet build (both methods receive the same move object). */
-  private readonly loaded = new WeakMap<Move, Promise<Permit[]>>();
+  private readonly loaded = new WeakMap<Move, Promise<RunSheetPermitRow[]>>();
   constructor(private readonly registry: RunSheetSourcesRegistry) {}
 
-  private permitsOf(move: Move, manager: EntityManager): Promise<Permit[]> {
+  /** The move's permits with each one's latest PDF, in one statement. */
+  private permitsOf(move: Move, manager: EntityManager): Promise<RunSheetPermitRow[]> {
     let p = this.loaded.get(move);
     if (!p) {
-      p = manager.find(Permit, { where: { moveId: move.id, status: Not('void') }, order: { jurisdiction: 'ASC', createdAt: 'ASC' } });
+      p = preparedQuery<RunSheetPermitRow>(
+        manager,
+        `SELECT p.id, p.jurisdiction, p.status, p.permit_number AS "permitNumber", p.valid_from AS "validFrom", p.valid_to AS "validTo",
+                p.permitted, p.conditions, p.conditions_text AS "conditionsText", p.route_text AS "routeText",
+                p.amendment_reason AS "amendmentReason", p.expiry_warning AS "expiryWarning",
+                (SELECT d.id FROM permit_documents d WHERE d.permit_id = p.id ORDER BY d.version DESC LIMIT 1) AS "documentId"
+           FROM permits p
+          WHERE p.move_id = $1 AND p.status <> 'void'
+          ORDER BY p.jurisdiction, p.created_at`,
+        [move.id],
+      );
       this.loaded.set(move, p);
     }
     return p;
@@ -47,11 +63,9 @@ export class PermitsRunSheetSource implements RunSheetSource, OnModuleInit {
   async permits(move: Move, manager: EntityManager): Promise<RunSheetPermit[]> {
     const list = await this.permitsOf(move, manager);
     if (!list.length) return [];
-    const docs = await manager.find(PermitDocument, { where: { permitId: In(list.map((p) => p.id)) }, order: { version: 'DESC' } });
     const dates = travelDates(move.requestedDeparture, move.travelDays);
     return list.map((p) => {
       const tz = zoneOf(p.jurisdiction);
-      const doc = docs.find((d) => d.permitId === p.id);
       let warning: string | null = null;
       if (p.validTo) {
         // the planned exit from the state: the end of the last travel day there, local time
@@ -66,7 +80,7 @@ export class PermitsRunSheetSource implements RunSheetSource, OnModuleInit {
         validFrom: p.validFrom ? instantToLocal(p.validFrom, tz).replace('T', ' ') : null,
         validTo: p.validTo ? instantToLocal(p.validTo, tz).replace('T', ' ') : null,
         conditions: conditionLines(p),
-        documentUrl: doc ? `/api/permits/${p.id}/documents/${doc.id}` : null,
+        documentUrl: p.documentId ? `/api/permits/${p.id}/documents/${p.documentId}` : null,
         warning: warning ?? (p.expiryWarning || null),
       };
     });

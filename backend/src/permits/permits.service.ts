@@ -6,6 +6,7 @@ import {
   type SessionUser, type SyncPermitsResponse, type UnmetCondition,
 } from '@amberline/common';
 import { AuditService, diff } from '../audit/audit.service';
+import { preparedQuery } from '../database/prepared';
 import { AppException, fieldError } from '../core/app-exception';
 import { travelDates } from '../moves/assessment.service';
 import { Move } from '../moves/entities/move.entity';
@@ -74,12 +75,12 @@ export class PermitsService implements OnModuleInit {
     if (q.assignee === 'none') where.push('p.assignee_id IS NULL');
     else if (q.assignee) add('p.assignee_id = ?', q.assignee === 'me' ? viewer.id : q.assignee);
     const cond = where.length ? where.join(' AND ') : 'true';
-    const [{ n }] = await this.ds.query(`SELECT count(*)::int AS n FROM permits p WHERE ${cond}`, params);
+    const [{ n }] = await preparedQuery<{ n: number }>(this.ds, `SELECT count(*)::int AS n FROM permits p WHERE ${cond}`, params);
     // the page is picked on the permit's own columns (filters and sort keys all live on the permit row, the move's
     // departure kept there by trigger), then joined, so the per-permit document and payment look-ups run for 20 rows
     const order = `${SORTS[q.sort] ?? SORTS.urgency}, p.id`;
-    const page = `(SELECT * FROM permits p WHERE ${cond} ORDER BY ${order} LIMIT ${q.pageSize} OFFSET ${(q.page - 1) * q.pageSize})`;
-    const rows: PermitRow[] = await this.ds.query(`${permitSummarySql(page)} ORDER BY ${order}`, params);
+    const page = `(SELECT * FROM permits p WHERE ${cond} ORDER BY ${order} LIMIT $${params.length + 1} OFFSET $${params.length + 2})`;
+    const rows = await preparedQuery<PermitRow>(this.ds, `${permitSummarySql(page)} ORDER BY ${order}`, [...params, q.pageSize, (q.page - 1) * q.pageSize]);
     return { items: rows.map((r) => toSummaryDto(r, now)), total: n, page: q.page, pageSize: q.pageSize };
   }
 

@@ -7,6 +7,7 @@ import {
   type JurisdictionRule, type JurisdictionSummaryDto, type RuleVersionDto, type SessionUser,
 } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
+import { preparedQuery } from '../database/prepared';
 import { AppException, fieldError } from '../core/app-exception';
 import { Jurisdiction } from './entities/jurisdiction.entity';
 import { RuleVersion } from './entities/rule-version.entity';
@@ -103,7 +104,8 @@ export class RulebookService implements OnApplicationBootstrap {
    */
   async currentRules(codes: string[]): Promise<Map<string, { id: string; record: JurisdictionRule; version: number }>> {
     if (!codes.length) return new Map();
-    const rows: { id: string; code: string; version: number; record: JurisdictionRule | null }[] = await this.ds.query(
+    const rows = await preparedQuery<{ id: string; code: string; version: number; record: JurisdictionRule | null }>(
+      this.ds,
       `SELECT v.id, v.code, v.version, CASE WHEN v.id = ANY($2::uuid[]) THEN NULL ELSE v.record END AS record
          FROM jurisdictions j JOIN rule_versions v ON v.code = j.code AND v.version = j.current_version
         WHERE j.code = ANY($1) ORDER BY v.code`,

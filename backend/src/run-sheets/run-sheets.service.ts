@@ -6,9 +6,11 @@ import {
   type AssessmentDto, type CheckFinding, type DepartureChecksDto, type RunSheetDto, type SessionUser, type UnmetCondition,
 } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
+import { entityColumns, entityFromRow, preparedQuery } from '../database/prepared';
 import { MailService } from '../mail/mail.service';
 import { AppException } from '../core/app-exception';
 import { Trailer } from '../fleet/entities/trailer.entity';
+import { User } from '../users/entities/user.entity';
 import type { Move } from '../moves/entities/move.entity';
 import { MoveExtensionsRegistry } from '../moves/move-extensions';
 import { MovesService, toMoveDto } from '../moves/moves.service';
@@ -84,14 +86,11 @@ export class RunSheetsService implements OnModuleInit {
     const permits = (await Promise.all(sources.map((s) => s.permits?.(move, manager) ?? []))).flat();
     const escorts = (await Promise.all(sources.map((s) => s.escorts?.(move, manager) ?? []))).flat();
     const permitted = (await Promise.all(sources.map((s) => s.permittedDimensions?.(move, manager) ?? null))).find((p) => p) ?? null;
-    const latest = await manager
-      .createQueryBuilder(DepartureChecks, 'c')
-      .leftJoinAndSelect('c.driver', 'driver')
-      .where('c.moveId = :moveId', { moveId })
-      .orderBy('c.submittedAt', 'DESC')
-      .limit(1) // one statement (findOne with a relation adds a DISTINCT id query); the driver join is many-to-one
-      .getOne();
-    const ack = await manager.createQueryBuilder(RunSheetAcknowledgement, 'a').where('a.moveId = :moveId', { moveId }).orderBy('a.acknowledgedAt', 'DESC').limit(1).getOne();
+    // the latest departure checks (with the driver who recorded them) and the latest acknowledgement, in one statement
+    const [row] = await preparedQuery<Record<string, unknown>>(manager, this.latestSql(), [moveId]);
+    const latest = row ? entityFromRow<DepartureChecks>(this.ds.getMetadata(DepartureChecks), row, 'c.') : null;
+    if (latest) latest.driver = entityFromRow<User>(this.ds.getMetadata(User), row, 'd.') ?? undefined;
+    const ack = row ? entityFromRow<RunSheetAcknowledgement>(this.ds.getMetadata(RunSheetAcknowledgement), row, 'a.') : null;
     const trailer = move.trailer ?? (await manager.findOneByOrFail(Trailer, { id: move.trailerId }));
     const fingerprint = this.fingerprint(move, permits, escorts);
     return {
@@ -112,6 +111,17 @@ export class RunSheetsService implements OnModuleInit {
       latestChecks: latest ? toChecksDto(latest) : null,
       acknowledgement: ack && !ack.voidedAt ? { at: ack.acknowledgedAt.toISOString(), fingerprint: ack.fingerprint, current: ack.fingerprint === fingerprint } : null,
     };
+  }
+
+  private latestSqlText?: string;
+  private latestSql(): string {
+    return (this.latestSqlText ??= `
+      SELECT ${entityColumns(this.ds.getMetadata(DepartureChecks), 'c', 'c.')}, ${entityColumns(this.ds.getMetadata(User), 'd', 'd.')},
+             ${entityColumns(this.ds.getMetadata(RunSheetAcknowledgement), 'a', 'a.')}
+        FROM (SELECT 1) one
+        LEFT JOIN LATERAL (SELECT * FROM departure_checks WHERE move_id = $1 ORDER BY submitted_at DESC LIMIT 1) c ON true
+        LEFT JOIN users d ON d.id = c.driver_id
+        LEFT JOIN LATERAL (SELECT * FROM run_sheet_acknowledgements WHERE move_id = $1 ORDER BY acknowledged_at DESC LIMIT 1) a ON true`);
   }
 
   fingerprint(move: Move, permits: unknown[], escorts: unknown[]): string {
