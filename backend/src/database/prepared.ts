@@ -18,8 +18,14 @@ export async function preparedQuery<T>(source: DataSource | EntityManager, text:
   const runner = manager.queryRunner ?? manager.connection.createQueryRunner();
   try {
     const client = (await runner.connect()) as PoolClient;
-    const res = await client.query({ name, text, values });
-    return res.rows as T[];
+    try {
+      return (await client.query({ name, text, values })).rows as T[];
+    } catch (e) {
+      // a migration run while this server was up changed a table under a statement this connection had prepared
+      // ("cached plan must not change result type"): run it unprepared; outside a transaction nothing is lost
+      if ((e as { code?: string }).code !== '0A000' || manager.queryRunner) throw e;
+      return (await client.query(text, values)).rows as T[];
+    }
   } finally {
     if (!manager.queryRunner) await runner.release();
   }

@@ -62,7 +62,7 @@ export class AssessmentService {
    * check is a pure function of that input; a move page, its assessment and its run sheet ask for the same one.
    * Results are shared: callers only read and serialize them.
    */
-  private readonly results = new LRUCache<string, PlanCheckResult>({ max: 2_000 });
+  private readonly results = new LRUCache<string, PlanCheckResult>({ max: 500 }); // a result is ~20–40 kB
 
   constructor(private readonly rulebook: RulebookService) {}
 
