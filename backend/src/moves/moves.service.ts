@@ -1,6 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { InjectRepository } from '@nestjs/typeorm';
-import { DataSource, EntityManager, Repository } from 'typeorm';
+import { DataSource, EntityManager } from 'typeorm';
 import {
   MOVE_STAGES, type AssessmentDto, type HistoryEntryDto, type MoveDto, type MoveStage, type MoveSummaryDto, type MovesPage, type SessionUser, type StageCounts,
 } from '@amberline/common';
@@ -67,7 +66,6 @@ export class MovesService {
     private readonly audit: AuditService,
     private readonly assessments: AssessmentService,
     private readonly extensions: MoveExtensionsRegistry,
-    @InjectRepository(Move) private readonly moves: Repository<Move>,
   ) {}
 
   /** Loads a move with its equipment and driver. Drivers may only see moves assigned to them. */
@@ -79,15 +77,15 @@ export class MovesService {
   }
 
   /** The move with its equipment and driver in one prepared statement (the move page's and run sheet's read). */
-  private getSql = (): string =>
-    (this.getSqlText ??= (() => {
-      const meta = (e: Function) => this.ds.getMetadata(e);
-      return `SELECT ${entityColumns(meta(Move), 'm')}, ${entityColumns(meta(Tractor), 't', 'tractor.')}, ${entityColumns(meta(Trailer), 'r', 'trailer.')},
-                     ${entityColumns(meta(User), 'd', 'driver.')}
-                FROM moves m JOIN tractors t ON t.id = m.tractor_id JOIN trailers r ON r.id = m.trailer_id LEFT JOIN users d ON d.id = m.driver_id
-               WHERE m.id = $1`;
-    })());
   private getSqlText?: string;
+  private getSql(): string {
+    const meta = (e: Function) => this.ds.getMetadata(e);
+    return (this.getSqlText ??= `
+      SELECT ${entityColumns(meta(Move), 'm')}, ${entityColumns(meta(Tractor), 't', 'tractor.')}, ${entityColumns(meta(Trailer), 'r', 'trailer.')},
+             ${entityColumns(meta(User), 'd', 'driver.')}
+        FROM moves m JOIN tractors t ON t.id = m.tractor_id JOIN trailers r ON r.id = m.trailer_id LEFT JOIN users d ON d.id = m.driver_id
+       WHERE m.id = $1`);
+  }
 
   private fromRow(row: Record<string, unknown>): Move {
     const m = entityFromRow<Move>(this.ds.getMetadata(Move), row)!;

@@ -2,7 +2,7 @@ import { Injectable, OnModuleInit } from '@nestjs/common';
 import { DataSource, EntityManager, In, Not } from 'typeorm';
 import {
   canPermitTransition, OPEN_PERMIT_STATUSES, PERMIT_STATUS_LABELS, PERMIT_STATUSES,
-  type AssessmentDto, type AssignPermitsResponse, type PermitDto, type PermitOverviewDto, type PermitsPage, type PermitStatus, type PermitSummaryDto,
+  type AssessmentDto, type AssignPermitsResponse, type PermitDto, type PermitOverviewDto, type PermitsPage, type PermitStatus,
   type SessionUser, type SyncPermitsResponse, type UnmetCondition,
 } from '@amberline/common';
 import { AuditService, diff } from '../audit/audit.service';
