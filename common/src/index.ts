@@ -12,3 +12,4 @@ export * from './types/permits';
 export * from './types/run-sheets';
 export * from './types/escorts';
 export * from './escorts/escort-slots';
+export * from './rulebook';

@@ -9,7 +9,6 @@ export * from './dimensions';
 export * from './securement';
 export * from './jurisdiction-rule';
 export * from './validate-rule';
-export * from './rulebook-samples';
 export * from './markings';
 export * from './sun-times';
 export * from './holidays';

@@ -1,11 +1,44 @@
 /**
- * A rulebook record: one jurisdiction's limits and requirements, every part with its source and as-of date.
- * JSON-serialisable (stored as jsonb by the server). Lengths in inches, weights in pounds, times in minutes.
+ * A rulebook record: what one jurisdiction regulates for oversize/overweight moves. Every value is a `Fact`: it
+ * carries its own status and source — `sourced` (read in the state's statute, administrative code or its DOT or
+ * state-patrol permit documents), `secondary` (read in an official secondary source such as a federal or
+ * university summary) or `unknown` (not on file: no value, and a note of what was searched).
+ *
+ * A value that is `null` in a known fact means the text sets no such limit ("no overall length limit"), which is
+ * different from not on file. JSON-serialisable (stored as jsonb by the server). Lengths in inches, weights in
+ * pounds, times in minutes, money in US dollars.
  */
-import type { RuleSource } from './reasons';
+
+/** How a value is known. */
+export type FactStatus = 'sourced' | 'secondary' | 'unknown';
+
+/** Where a known value comes from. */
+export type RuleSource = {
+  /** Statute or code section, or document title and section, e.g. "24VAC20-81-180(B)". */
+  citation: string;
+  /** The URL as found. */
+  url: string;
+  /** Edition or effective date of the text, as it names itself (e.g. "effective 2023-07-01", "rev. 2022"). */
+  edition: string;
+  /** Date the value was read, `YYYY-MM-DD`. */
+  asOf: string;
+  /** The words of the text the value was read from (short). */
+  quote?: string;
+  note?: string;
+};
+
+export type KnownFact<T> = { status: 'sourced' | 'secondary'; value: T } & RuleSource;
+export type UnknownFact = { status: 'unknown'; note: string };
+/** One rule value with its own status and source. */
+export type Fact<T> = KnownFact<T> | UnknownFact;
+
+export const isKnown = <T>(f: Fact<T> | undefined | null): f is KnownFact<T> => !!f && f.status !== 'unknown';
+/** The value of a known fact, else undefined. */
+export const valueOf = <T>(f: Fact<T> | undefined | null): T | undefined => (isKnown(f) ? f.value : undefined);
 
 /** Road classes an escort rule can name. `multilane` = divided / four or more lanes (not interstate). */
 export type RoadType = 'two-lane' | 'multilane' | 'interstate';
+export const ROAD_TYPES: readonly RoadType[] = ['two-lane', 'multilane', 'interstate'];
 
 /** Measures a trigger can look at. Lengths in inches, weights in pounds. */
 export type Measure =
@@ -16,28 +49,63 @@ export type Measure =
   | 'rearOverhang'
   | 'sideProjection'
   | 'gross';
+export const MEASURES: readonly Measure[] = ['width', 'height', 'length', 'frontOverhang', 'rearOverhang', 'sideProjection', 'gross'];
 
 /** `over` is a strict threshold (value > over); `atLeast` an inclusive one (value ≥ atLeast). Give one. */
 export type Trigger = { measure: Measure; over?: number; atLeast?: number };
 
-export type LegalLimits = {
-  widthIn: number;
-  heightIn: number;
-  lengthIn: number;
-  frontOverhangIn: number | null;
-  rearOverhangIn: number | null;
-  singleAxleLb: number;
-  tandemLb: number;
-  grossLb: number;
-  bridgeFormula: boolean;
+export type BridgeRule = {
+  /** The federal bridge formula (23 U.S.C. 127) or a state table of the same shape. */
+  formula: boolean;
   /** Two-tandem exception distance (36 ft federally); null = none. */
   tandemPairMinFt: number | null;
-  bridgeTie: 'down' | 'up';
-  /** Weights (axle, tandem, gross, bridge formula). */
-  source: RuleSource;
-  /** Sources of the dimension limits, which often come from different texts. */
-  dimensionSources: { width: RuleSource; height: RuleSource; length: RuleSource; overhangs: RuleSource };
+  /** How the table rounds a tie between two rows. */
+  tie: 'down' | 'up';
 };
+
+export type LegalLimits = {
+  widthIn: Fact<number>;
+  heightIn: Fact<number>;
+  /** Overall length of a tractor-semitrailer; null = the text sets none for this combination. */
+  overallLengthIn: Fact<number | null>;
+  semitrailerLengthIn: Fact<number | null>;
+  /** Load projection beyond the front bumper / rear of the vehicle; null = none set. */
+  frontOverhangIn: Fact<number | null>;
+  rearOverhangIn: Fact<number | null>;
+  singleAxleLb: Fact<number>;
+  tandemLb: Fact<number>;
+  tridemLb: Fact<number | null>;
+  grossLb: Fact<number>;
+  bridge: Fact<BridgeRule>;
+  /** Weight per inch of tire width, where the state uses it. */
+  tireLbPerInch: Fact<number | null>;
+};
+
+/** Routine (non-superload) permit maxima. Any may be absent. */
+export type PermitMaxima = {
+  widthIn?: number;
+  heightIn?: number;
+  lengthIn?: number;
+  singleAxleLb?: number;
+  tandemLb?: number;
+  tridemLb?: number;
+  quadLb?: number;
+  grossLb?: number;
+  tireLbPerInch?: number;
+  note?: string;
+};
+
+export type PermitRules = {
+  /** Single-trip permit validity. */
+  validityDays: Fact<number>;
+  /** How far ahead to apply. */
+  leadTimeDays: Fact<number>;
+  /** Permit classes the state issues, in its own words (e.g. "single trip", "annual"). */
+  classes: Fact<string[]>;
+  routineMaxima: Fact<PermitMaxima>;
+};
+
+export type SuperloadThresholds = { widthOverIn?: number; heightOverIn?: number; lengthOverIn?: number; grossOverLb?: number };
 
 export type EscortRule = {
   /** The measure and threshold that asks for escorts. */
@@ -46,19 +114,32 @@ export type EscortRule = {
   front: number;
   rear: number;
   heightPole?: boolean;
-  source: RuleSource;
+  /** Accepted alternatives in the text's words (e.g. "an amber flashing light instead of the rear escort"). */
+  alternative?: string;
+  /** Law-enforcement escort instead of (or besides) civilian escorts. */
+  police?: boolean;
 };
 
+/** Escort rules by the measure that asks for them; each measure is its own fact. */
 export type EscortRules = {
-  rules: EscortRule[];
-  /**
-   * A load over escort limits in two dimensions needs front and rear escorts, except when the pair is one of
-   * `exceptPairs` (e.g. length and an overhang). Null when the jurisdiction has no such rule.
-   */
-  twoDimensionRule: { exceptPairs: [Measure, Measure][]; source: RuleSource } | null;
+  width: Fact<EscortRule[]>;
+  height: Fact<EscortRule[]>;
+  length: Fact<EscortRule[]>;
+  frontOverhang: Fact<EscortRule[]>;
+  rearOverhang: Fact<EscortRule[]>;
+  /** Off-centre / side projection. */
+  sideProjection: Fact<EscortRule[]>;
+  /** A load over escort limits in two measures needs front and rear escorts unless the pair is excepted; null = no such rule. */
+  twoDimensionRule: Fact<{ exceptPairs: [Measure, Measure][] } | null>;
   /** The height pole is set this far above the load's height. */
-  heightPole: { marginIn: number; source: RuleSource } | null;
+  heightPoleMarginIn: Fact<number>;
+  /** Certification the escort operator needs, in the text's words; null = none asked. */
+  certification: Fact<string | null>;
 };
+
+/** The escort measures an `EscortRules` holds, in order. */
+export const ESCORT_MEASURES = ['width', 'height', 'length', 'frontOverhang', 'rearOverhang', 'sideProjection'] as const;
+export type EscortMeasure = (typeof ESCORT_MEASURES)[number];
 
 export type SignRule = {
   /** Any of these triggers asks for the sign; `whenOversize` = any dimension over the legal limit. */
@@ -73,7 +154,6 @@ export type SignRule = {
   positions: string[];
   /** Sign on each escort vehicle. */
   escortSign?: { text: string; minWidthIn: number; minHeightIn: number; letterHeightIn: number };
-  source: RuleSource;
 };
 
 export type FlagRule = {
@@ -84,16 +164,13 @@ export type FlagRule = {
   maxCount?: number;
   minSquareIn: number;
   colors: string;
-  source: RuleSource;
 };
 
 export type LampRule = {
   when: Trigger[];
-  /** Plain description of the lamps and where they go. */
   lamps: { position: string; color: 'red' | 'amber'; count: number; visibleFt?: number }[];
   reflectors?: { position: string; color: 'red' | 'amber'; count: number }[];
   note?: string;
-  source: RuleSource;
 };
 
 export type HolidayName =
@@ -111,36 +188,64 @@ export type HolidayName =
   | 'christmas-eve'
   | 'christmas';
 
+/** Dimensions a travel rule applies above (any one over); absent = every permitted load. */
+export type AppliesAbove = { widthOverIn?: number; heightOverIn?: number; lengthOverIn?: number; grossOverLb?: number };
+
+export type DaylightRule = {
+  /** From sunrise + `startOffsetMin` to sunset + `endOffsetMin` (negative = before). */
+  startOffsetMin: number;
+  endOffsetMin: number;
+  /** The rule applies only to loads over these (e.g. night travel allowed up to 10 ft wide). */
+  appliesAbove?: AppliesAbove;
+};
+
+export type WeekendBan = {
+  /** 0 = Sunday … 6 = Saturday. */
+  day: number;
+  /** Local `HH:MM`; whole day when absent. */
+  from?: string;
+  to?: string;
+};
+export type WeekendRule = { bans: WeekendBan[]; appliesAbove?: AppliesAbove };
+
+export type HolidayRule = {
+  names: HolidayName[];
+  /**
+   * When the restriction starts: `noon-weekday-before` (noon of the preceding weekday, Friday for a Monday
+   * holiday), `noon-day-before`, or `day-only` (the holiday itself).
+   */
+  from: 'noon-weekday-before' | 'noon-day-before' | 'day-only';
+  /** Which date of a weekend holiday is restricted: the calendar date, the observed date, or both. */
+  observance: 'actual' | 'observed' | 'both';
+  /** When the restriction ends on the holiday, local `HH:MM` (absent = midnight at its end). */
+  until?: string;
+  appliesAbove?: AppliesAbove;
+};
+
 export type Curfew = {
-  /** Local wall-clock `HH:MM`, end exclusive. */
+  /** The named area (city, county, metro) the curfew covers, in the text's words. */
+  area: string;
+  /** Local wall-clock `HH:MM`; an end before the start crosses midnight. */
   start: string;
   end: string;
-  /** 0 = Sunday … 6 = Saturday; all days when absent. */
+  /** 0 = Sunday … 6 = Saturday (the day the curfew starts); all days when absent. */
   days?: number[];
+  /** `urban` = on segments marked urban; `everywhere` = the whole jurisdiction. */
   appliesIn: 'urban' | 'everywhere';
-  /** Exempt configurations (e.g. overweight only, or overlength only up to `maxLengthIn`). */
   exempt?: { overweightOnly?: boolean; overlengthOnlyMaxIn?: number };
-  source: RuleSource;
+  appliesAbove?: AppliesAbove;
 };
 
 export type TravelRules = {
-  /** Travel only in daylight: from sunrise + `startOffsetMin` to sunset + `endOffsetMin` (negative = before). */
-  daylight: { startOffsetMin: number; endOffsetMin: number; source: RuleSource } | null;
-  weekends: { allowed: boolean; source: RuleSource };
-  holidays: {
-    names: HolidayName[];
-    /**
-     * When the restriction starts: `noon-weekday-before` (noon of the preceding weekday, Friday for a Monday
-     * holiday), `noon-day-before`, or `day-only` (the holiday itself).
-     */
-    from: 'noon-weekday-before' | 'noon-day-before' | 'day-only';
-    /** Which date of a weekend holiday is restricted: the calendar date, the federal observed date, or both. */
-    observance: 'actual' | 'observed' | 'both';
-    source: RuleSource;
-  };
-  curfews: Curfew[];
-  /** No movement when visibility is reduced below this distance. */
-  minVisibilityFt?: { value: number; source: RuleSource };
+  /** Daylight-only travel; null = the text allows travel at any hour. */
+  daylight: Fact<DaylightRule | null>;
+  /** Weekend limits; an empty list = weekends allowed. */
+  weekends: Fact<WeekendRule>;
+  /** Holiday limits; an empty list of names = no holiday limit. */
+  holidays: Fact<HolidayRule>;
+  curfews: Fact<Curfew[]>;
+  /** No movement when visibility is reduced below this distance (ft). */
+  minVisibilityFt: Fact<number | null>;
 };
 
 export type WidthTier = { upToIn?: number; feeUsd: number };
@@ -150,7 +255,7 @@ export type WeightBracket = { overLb: number; upToLb?: number; feeUsd: number };
 /** Fee formula. Amounts in US dollars. */
 export type FeeRule = {
   baseUsd: number;
-  /** Replaces nothing: added to the base. First tier whose `upToIn` covers the width (last without `upToIn`). */
+  /** Added to the base. First tier whose `upToIn` covers the width (last without `upToIn`). */
   widthTiers?: WidthTier[];
   /** For oversize moves: the first tier whose maxima all hold, else the last tier. */
   dimensionTiers?: DimensionTier[];
@@ -158,35 +263,39 @@ export type FeeRule = {
   weightBrackets?: WeightBracket[];
   /** Per ton (2,000 lb) per mile above a threshold: a fixed weight, or the registered gross. */
   tonMile?: { usdPerTonMile: number; overLb?: number; overRegisteredGross?: boolean; appliesAboveLb?: number };
+  /** Per mile travelled in the state. */
+  perMile?: { usdPerMile: number; when?: 'always' | 'oversize' | 'overweight' };
+  /**
+   * A load both oversize and overweight: `sum` adds the dimension and weight parts; `weight-only` charges the base
+   * plus the weight part alone (the dimension part is not added).
+   */
+  combined?: 'sum' | 'weight-only';
   addOns?: { label: string; feeUsd: number; when?: 'always' | 'oversize' | 'overweight' }[];
   refundable?: boolean;
-  source: RuleSource;
 };
 
-export type SuperloadThresholds = {
-  widthOverIn?: number;
-  heightOverIn?: number;
-  lengthOverIn?: number;
-  grossOverLb?: number;
-  source: RuleSource;
-};
+export type SpeedRule = { maxMph: number | null; note?: string };
 
 export type JurisdictionRule = {
-  /** Postal code or `US` for the federal default. */
+  /** Postal code. */
   code: string;
   name: string;
-  /** True when any part of the record is sample data. */
-  sample: boolean;
+  /** Record schema version. */
+  schema: 2;
+  /** Date the record was last reviewed, `YYYY-MM-DD`. */
   asOf: string;
   legal: LegalLimits;
-  permit: { validityDays: number; leadTimeDays: number; source: RuleSource };
+  permit: PermitRules;
+  superload: Fact<SuperloadThresholds>;
   escorts: EscortRules;
-  signs: SignRule[];
-  flags: FlagRule[];
-  lamps: LampRule[];
+  signs: Fact<SignRule[]>;
+  flags: Fact<FlagRule[]>;
+  lamps: Fact<LampRule[]>;
   travel: TravelRules;
-  fee: FeeRule;
-  superload: SuperloadThresholds;
+  fee: Fact<FeeRule>;
+  speed: Fact<SpeedRule>;
+  /** What the researcher searched and did not find, for the next person. */
+  researchNotes?: string;
 };
 
 /** The measured facts a rule is compared with. */
@@ -206,6 +315,17 @@ export function triggerFires(t: Trigger, m: MeasuredLoad): boolean {
   if (t.over !== undefined && v > t.over) return true;
   if (t.atLeast !== undefined && v >= t.atLeast) return true;
   return false;
+}
+
+/** True when the load is over any of the given dimensions (or the rule has none). */
+export function appliesTo(a: AppliesAbove | undefined, m: Partial<MeasuredLoad>): boolean {
+  if (!a) return true;
+  return (
+    (a.widthOverIn !== undefined && (m.widthIn ?? 0) > a.widthOverIn) ||
+    (a.heightOverIn !== undefined && (m.heightIn ?? 0) > a.heightOverIn) ||
+    (a.lengthOverIn !== undefined && (m.lengthIn ?? 0) > a.lengthOverIn) ||
+    (a.grossOverLb !== undefined && (m.grossLb ?? 0) > a.grossOverLb)
+  );
 }
 
 export function measureValue(measure: Measure, m: MeasuredLoad): number {
@@ -234,24 +354,6 @@ export function describeTrigger(t: Trigger): { threshold: number; words: string 
   return t.over !== undefined ? { threshold: t.over, words: 'over' } : { threshold: t.atLeast ?? 0, words: 'at least' };
 }
 
-/** A dimension over the jurisdiction's legal limit. */
-export type OverLegal = { measure: Measure; value: number; limit: number; overBy: number; source: RuleSource };
-
-/** Dimensions of the load over the legal limits (width, height, length, overhangs). */
-export function dimensionsOverLegal(legal: LegalLimits, m: MeasuredLoad): OverLegal[] {
-  const out: OverLegal[] = [];
-  const src = legal.dimensionSources;
-  const check = (measure: Measure, value: number, limit: number | null, source: RuleSource): void => {
-    if (limit !== null && value > limit + 1e-9) out.push({ measure, value, limit, overBy: value - limit, source });
-  };
-  check('width', m.widthIn, legal.widthIn, src.width);
-  check('height', m.heightIn, legal.heightIn, src.height);
-  check('length', m.lengthIn, legal.lengthIn, src.length);
-  check('frontOverhang', m.frontOverhangIn, legal.frontOverhangIn, src.overhangs);
-  check('rearOverhang', m.rearOverhangIn, legal.rearOverhangIn, src.overhangs);
-  return out;
-}
-
 export const MEASURE_LABELS: Record<Measure, string> = {
   width: 'width',
   height: 'height',
@@ -262,7 +364,7 @@ export const MEASURE_LABELS: Record<Measure, string> = {
   gross: 'gross weight',
 };
 
-/** Cites a rule source in one string, marking sample data. */
-export function cite(s: RuleSource): string {
-  return `${s.citation} (as of ${s.asOf}${s.sample ? ', sample data' : ''})`;
+/** Cites a known fact in one string, marking secondary sources. */
+export function cite(s: RuleSource & { status?: FactStatus }): string {
+  return `${s.citation}${s.status === 'secondary' ? ' (secondary source)' : ''} (as of ${s.asOf})`;
 }

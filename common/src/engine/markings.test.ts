@@ -1,5 +1,38 @@
 import { projectingLoadMarkings } from './markings';
-import { SAMPLE_RULE_MD, SAMPLE_RULE_NY, SAMPLE_RULE_TX } from './rulebook-samples';
+import { fixtureRule, known } from './__fixtures__/facts';
+
+// Marking rules in the shape of the cited texts (fixtures; the states' own records live in src/rulebook).
+const OVERSIZE_SIGN = {
+  text: 'OVERSIZE LOAD',
+  minWidthIn: 84,
+  minHeightIn: 18,
+  letterHeightIn: 10,
+  colors: 'black letters on yellow',
+  positions: ['front of the vehicle', 'rear of the load'],
+  escortSign: { text: 'OVERSIZE LOAD', minWidthIn: 60, minHeightIn: 12, letterHeightIn: 8 },
+};
+const SAMPLE_RULE_TX = fixtureRule('TX', 'Texas', {
+  flags: known([{ kind: 'overhang' as const, when: [{ measure: 'rearOverhang' as const, atLeast: 48 }], minCount: 1, minSquareIn: 12, colors: 'red' }], 'Tex. Transp. Code 547.382'),
+  lamps: known(
+    [
+      {
+        when: [{ measure: 'rearOverhang' as const, atLeast: 48 }],
+        lamps: [
+          { position: 'rear of the load', color: 'red' as const, count: 2, visibleFt: 500 },
+          { position: 'sides of the projecting load', color: 'red' as const, count: 2, visibleFt: 500 },
+        ],
+        reflectors: [{ position: 'rear of the load', color: 'red' as const, count: 2 }],
+        note: 'at night',
+      },
+    ],
+    'Tex. Transp. Code 547.382',
+  ),
+});
+const SAMPLE_RULE_MD = fixtureRule('MD', 'Maryland', { signs: known([{ ...OVERSIZE_SIGN, strokeIn: 1.625, when: [{ measure: 'width' as const, over: 108 }] }], 'COMAR 11.04.04.01') });
+const SAMPLE_RULE_NY = fixtureRule('NY', 'New York', {
+  signs: known([{ ...OVERSIZE_SIGN, strokeIn: 1.41, when: [], whenOversize: true }], '17 NYCRR 154-1.13'),
+  flags: known([{ kind: 'corners' as const, when: [], whenOversize: true, minCount: 4, minSquareIn: 18, colors: 'red or orange fluorescent' }], 'fixture corner flags'),
+});
 
 describe('projectingLoadMarkings', () => {
   // 49 CFR 393.87: strict "more than" thresholds.
@@ -50,7 +83,7 @@ describe('projectingLoadMarkings', () => {
     [108, 0, 'COMAR 11.04.04.01: exactly 9 ft wide → no sign'],
     [109, 2, 'COMAR 11.04.04.01: above 9 ft → OVERSIZE LOAD front and rear'],
   ])('Maryland: width %i in → %i signs (%s)', (width, n) => {
-    const r = projectingLoadMarkings({ sideProjectionIn: 3, rearProjectionIn: 0, rearProjectionWidthIn: 0, widthIn: width, heightIn: 150, lengthIn: 900 }, SAMPLE_RULE_MD);
+    const r = projectingLoadMarkings({ sideProjectionIn: 3, rearProjectionIn: 0, rearProjectionWidthIn: 0, widthIn: width, heightIn: 150, lengthIn: 900 }, SAMPLE_RULE_MD, width > 102);
     expect(r.signs).toHaveLength(n);
     if (n > 0) {
       expect(r.signs[0]).toMatchObject({ text: 'OVERSIZE LOAD', minWidthIn: 84, minHeightIn: 18, letterHeightIn: 10, strokeIn: 1.625 });
@@ -58,13 +91,21 @@ describe('projectingLoadMarkings', () => {
     }
   });
 
-  it('17 NYCRR 154-1.13: oversize load → sign with 1.41 in stroke; sample corner flags are marked sample data', () => {
-    const r = projectingLoadMarkings({ sideProjectionIn: 20, rearProjectionIn: 0, rearProjectionWidthIn: 0, widthIn: 142, heightIn: 150, lengthIn: 900 }, SAMPLE_RULE_NY);
+  it('17 NYCRR 154-1.13: oversize load → sign with 1.41 in stroke; corner flags from the rule’s own source', () => {
+    const r = projectingLoadMarkings({ sideProjectionIn: 20, rearProjectionIn: 0, rearProjectionWidthIn: 0, widthIn: 142, heightIn: 150, lengthIn: 900 }, SAMPLE_RULE_NY, true);
     expect(r.signs[0].strokeIn).toBe(1.41);
     expect(r.signs[0].source).toMatch(/17 NYCRR 154-1.13/);
     const corners = r.flags.filter((f) => f.position.includes('corner'));
     expect(corners).toHaveLength(4);
-    expect(corners[0].source).toMatch(/sample data/);
+    expect(corners[0].source).toMatch(/fixture corner flags/);
+  });
+
+  it('a rule with signs, flags and lamps not on file says so (federal 393.87 flags and 393.11 lamps still listed)', () => {
+    const r = projectingLoadMarkings({ sideProjectionIn: 20, rearProjectionIn: 60, rearProjectionWidthIn: 12, widthIn: 142 }, fixtureRule('GA', 'Georgia'), true);
+    expect(r.notOnFile).toEqual({ signs: true, flags: true, lamps: true });
+    expect(r.signs).toEqual([]);
+    expect(r.flags.every((f) => f.source === '49 CFR 393.87')).toBe(true);
+    expect(r.reasons.filter((x) => /not on file/.test(x.message))).toHaveLength(3);
   });
 
   it('bad input → RangeError', () => {
@@ -76,29 +117,18 @@ describe('projectingLoadMarkings', () => {
 describe('jurisdiction flag rules (rulebook data)', () => {
   // 290-RICR-40-00-1.5 (Rhode Island): red or orange fluorescent flags at least 18 in square, 2 to 6 at the widest
   // extremity of an overwidth load.
-  const ri = {
-    ...SAMPLE_RULE_NY,
-    code: 'RI',
-    name: 'Rhode Island',
-    signs: [],
-    flags: [
-      {
-        kind: 'width-extremities' as const,
-        when: [],
-        whenOversize: true,
-        minCount: 2,
-        maxCount: 6,
-        minSquareIn: 18,
-        colors: 'red or orange fluorescent',
-        source: { citation: '290-RICR-40-00-1.5', asOf: '2026-12-01' },
-      },
-    ],
-  };
+  const ri = fixtureRule('RI', 'Rhode Island', {
+    signs: known([]),
+    flags: known(
+      [{ kind: 'width-extremities' as const, when: [], whenOversize: true, minCount: 2, maxCount: 6, minSquareIn: 18, colors: 'red or orange fluorescent' }],
+      '290-RICR-40-00-1.5',
+    ),
+  });
   it.each([
     [102, 0],
     [103, 2],
   ])('290-RICR-40-00-1.5: width %i in → %i flags at the widest extremity', (widthIn, n) => {
-    const r = projectingLoadMarkings({ sideProjectionIn: 0, rearProjectionIn: 0, rearProjectionWidthIn: 0, widthIn, heightIn: 150, lengthIn: 900 }, ri);
+    const r = projectingLoadMarkings({ sideProjectionIn: 0, rearProjectionIn: 0, rearProjectionWidthIn: 0, widthIn, heightIn: 150, lengthIn: 900 }, ri, widthIn > 102);
     const f = r.flags.filter((x) => x.source.includes('290-RICR'));
     expect(f).toHaveLength(n);
     for (const x of f) expect(x.minSquareIn).toBe(18);

@@ -1,15 +1,16 @@
 /** Flags, signs and lamps for a projecting or oversize load. */
 import {
   JurisdictionRule,
+  LampRule,
   MeasuredLoad,
   cite,
-  dimensionsOverLegal,
+  isKnown,
   triggerFires,
+  type KnownFact,
   type SignRule,
   type Trigger,
 } from './jurisdiction-rule';
 import { PLANNING_CAUTION, Reason, SOURCES } from './reasons';
-import { FEDERAL_DEFAULT_RULE } from './rulebook-samples';
 import { formatFeetInches } from './units';
 import { ABSURD, checkNumber } from './validate';
 
@@ -42,6 +43,22 @@ export type SignPlacement = {
   source: string;
 };
 
+/** Night lamps on projecting loads, 49 CFR 393.11 Table 1 (read in a secondary summary). Apply in every jurisdiction. */
+export const FEDERAL_LAMP_RULES: LampRule[] = [
+  { when: [{ measure: 'rearOverhang', atLeast: 48 }], lamps: [{ position: 'extreme rear of the load', color: 'red', count: 1 }], note: 'at night' },
+  {
+    when: [{ measure: 'sideProjection', over: 4 }],
+    lamps: [
+      { position: 'front of the side projection', color: 'amber', count: 1 },
+      { position: 'rear of the side projection', color: 'red', count: 1 },
+    ],
+    note: 'at night, on each projecting side',
+  },
+];
+
+/** Which of the jurisdiction's marking topics are not on file (federal 393.87 flags and 393.11 lamps still listed). */
+export type MarkingsUnknown = { signs: boolean; flags: boolean; lamps: boolean };
+
 export type MarkingsResult = {
   sideFlags: boolean;
   rearFlags: 0 | 1 | 2;
@@ -51,6 +68,8 @@ export type MarkingsResult = {
   signs: SignPlacement[];
   escortSigns: SignPlacement[];
   reasons: Reason[];
+  /** Present when a jurisdiction rule was given: its topics not on file. */
+  notOnFile?: MarkingsUnknown;
   caution: string;
 };
 
@@ -63,7 +82,7 @@ const FLAG_COLORS = 'red or orange fluorescent';
  * two (marking the maximum width) if wider. Corner flags, signs and night lamps come from the jurisdiction rule
  * (the federal default rule when none is given).
  */
-export function projectingLoadMarkings(input: MarkingsInput, rule?: JurisdictionRule): MarkingsResult {
+export function projectingLoadMarkings(input: MarkingsInput, rule?: JurisdictionRule, oversize = false): MarkingsResult {
   const side = checkNumber('sideProjectionIn', input.sideProjectionIn, { min: 0, max: ABSURD.widthIn, unit: 'in' });
   const left = checkNumber('sideProjectionLeftIn', input.sideProjectionLeftIn ?? side, { min: 0, max: ABSURD.widthIn, unit: 'in' });
   const right = checkNumber('sideProjectionRightIn', input.sideProjectionRightIn ?? side, { min: 0, max: ABSURD.widthIn, unit: 'in' });
@@ -106,7 +125,6 @@ export function projectingLoadMarkings(input: MarkingsInput, rule?: Jurisdiction
     reasons.push({ code: 'rear-flags', message: `${reason}: ${rearFlags} flag${rearFlags === 1 ? '' : 's'}`, value: rear, limit: 48, unit: 'in', source: src87 });
   }
 
-  const r = rule ?? FEDERAL_DEFAULT_RULE;
   const m: MeasuredLoad = {
     widthIn: input.widthIn ?? 0,
     heightIn: input.heightIn ?? 0,
@@ -116,57 +134,64 @@ export function projectingLoadMarkings(input: MarkingsInput, rule?: Jurisdiction
     sideProjectionIn: Math.max(side, left, right),
     grossLb: input.grossLb ?? 0,
   };
-  const oversize = input.widthIn !== undefined && dimensionsOverLegal(r.legal, m).length > 0;
   const fires = (when: Trigger[], whenOversize?: boolean): boolean =>
     (whenOversize === true && oversize) || when.some((t) => triggerFires(t, m));
+  const name = rule?.name ?? 'federal';
 
-  for (const fr of r.flags) {
-    if (!fires(fr.when, fr.whenOversize)) continue;
-    const why = fr.whenOversize && oversize ? 'oversize load' : 'projecting load';
-    const positions =
-      fr.kind === 'corners'
-        ? ['front left corner', 'front right corner', 'rear left corner', 'rear right corner']
-        : fr.kind === 'width-extremities'
-          ? Array.from({ length: fr.minCount }, (_, i) => `widest extremity, flag ${i + 1}${fr.maxCount ? ` (${fr.minCount}–${fr.maxCount})` : ''}`)
-          : Array.from({ length: fr.minCount }, (_, i) => `end of the overhang, flag ${i + 1}`);
-    for (const position of positions) {
-      flags.push({ position, minSquareIn: fr.minSquareIn, colors: fr.colors, reason: `${r.name}: ${why}`, source: cite(fr.source) });
+  if (rule && isKnown(rule.flags)) {
+    const fsrc = cite(rule.flags);
+    for (const fr of rule.flags.value) {
+      if (!fires(fr.when, fr.whenOversize)) continue;
+      const why = fr.whenOversize && oversize ? 'oversize load' : 'projecting load';
+      const positions =
+        fr.kind === 'corners'
+          ? ['front left corner', 'front right corner', 'rear left corner', 'rear right corner']
+          : fr.kind === 'width-extremities'
+            ? Array.from({ length: fr.minCount }, (_, i) => `widest extremity, flag ${i + 1}${fr.maxCount ? ` (${fr.minCount}–${fr.maxCount})` : ''}`)
+            : Array.from({ length: fr.minCount }, (_, i) => `end of the overhang, flag ${i + 1}`);
+      for (const position of positions) flags.push({ position, minSquareIn: fr.minSquareIn, colors: fr.colors, reason: `${name}: ${why}`, source: fsrc });
+      reasons.push({ code: `flags-${fr.kind}`, message: `${name}: ${fr.kind} flags (${why})`, source: fsrc });
     }
-    reasons.push({ code: `flags-${fr.kind}`, message: `${r.name}: ${fr.kind} flags (${why})`, source: cite(fr.source), sample: fr.source.sample });
   }
 
   const lamps: LampPlacement[] = [];
   const reflectors: MarkingsResult['reflectors'] = [];
-  const lampRules = rule && rule !== FEDERAL_DEFAULT_RULE ? [...FEDERAL_DEFAULT_RULE.lamps, ...rule.lamps] : FEDERAL_DEFAULT_RULE.lamps;
-  for (const lr of lampRules) {
-    if (!fires(lr.when)) continue;
-    const reason = `${lr.note ?? 'at night'}: ${lr.when.map((t) => `${t.measure} ${t.over !== undefined ? `over ${t.over}` : `at least ${t.atLeast}`} in`).join(' or ')}`;
-    for (const l of lr.lamps) lamps.push({ ...l, reason, source: cite(lr.source) });
-    for (const rf of lr.reflectors ?? []) reflectors.push({ ...rf, source: cite(lr.source) });
-    reasons.push({ code: 'lamps', message: `lamps ${reason}`, source: cite(lr.source), sample: lr.source.sample });
+  const lampSets: { rules: LampRule[]; source: string }[] = [{ rules: FEDERAL_LAMP_RULES, source: SOURCES.cfr393_11 }];
+  if (rule && isKnown(rule.lamps)) lampSets.push({ rules: rule.lamps.value, source: cite(rule.lamps) });
+  for (const set of lampSets) {
+    for (const lr of set.rules) {
+      if (!fires(lr.when)) continue;
+      const reason = `${lr.note ?? 'at night'}: ${lr.when.map((t) => `${t.measure} ${t.over !== undefined ? `over ${t.over}` : `at least ${t.atLeast}`} in`).join(' or ')}`;
+      for (const l of lr.lamps) lamps.push({ ...l, reason, source: set.source });
+      for (const rf of lr.reflectors ?? []) reflectors.push({ ...rf, source: set.source });
+      reasons.push({ code: 'lamps', message: `lamps ${reason}`, source: set.source });
+    }
   }
 
   const signs: SignPlacement[] = [];
   const escortSigns: SignPlacement[] = [];
-  for (const sr of r.signs) {
-    if (!fires(sr.when, sr.whenOversize)) continue;
-    const reason = sr.whenOversize && oversize ? `${r.name}: oversize load` : `${r.name}: ${describeSignTrigger(sr)}`;
-    for (const position of sr.positions) signs.push(signAt(sr, position, reason));
-    if (sr.escortSign) {
-      escortSigns.push({
-        ...sr.escortSign,
-        position: 'each escort vehicle',
-        colors: sr.colors,
-        reason,
-        source: cite(sr.source),
-      });
+  if (rule && isKnown(rule.signs)) {
+    const sf = rule.signs;
+    for (const sr of sf.value) {
+      if (!fires(sr.when, sr.whenOversize)) continue;
+      const reason = sr.whenOversize && oversize ? `${name}: oversize load` : `${name}: ${describeSignTrigger(sr)}`;
+      for (const position of sr.positions) signs.push(signAt(sr, sf, position, reason));
+      if (sr.escortSign) {
+        escortSigns.push({ ...sr.escortSign, position: 'each escort vehicle', colors: sr.colors, reason, source: cite(sf) });
+      }
+      reasons.push({ code: 'signs', message: `${sr.text} signs: ${reason}`, source: cite(sf) });
     }
-    reasons.push({ code: 'signs', message: `${sr.text} signs: ${reason}`, source: cite(sr.source), sample: sr.source.sample });
   }
-  return { sideFlags, rearFlags, flags, lamps, reflectors, signs, escortSigns, reasons, caution: PLANNING_CAUTION };
+  const notOnFile = rule ? { signs: !isKnown(rule.signs), flags: !isKnown(rule.flags), lamps: !isKnown(rule.lamps) } : undefined;
+  if (notOnFile) {
+    for (const [topic, missing] of Object.entries(notOnFile)) {
+      if (missing) reasons.push({ code: `not-on-file-${topic}`, message: `${name}: ${topic} rules not on file — check the permit`, source: 'not on file' });
+    }
+  }
+  return { sideFlags, rearFlags, flags, lamps, reflectors, signs, escortSigns, reasons, ...(notOnFile ? { notOnFile } : {}), caution: PLANNING_CAUTION };
 }
 
-function signAt(sr: SignRule, position: string, reason: string): SignPlacement {
+function signAt(sr: SignRule, src: KnownFact<SignRule[]>, position: string, reason: string): SignPlacement {
   return {
     text: sr.text,
     position,
@@ -176,7 +201,7 @@ function signAt(sr: SignRule, position: string, reason: string): SignPlacement {
     ...(sr.strokeIn !== undefined ? { strokeIn: sr.strokeIn } : {}),
     colors: sr.colors,
     reason,
-    source: cite(sr.source),
+    source: cite(src),
   };
 }
 

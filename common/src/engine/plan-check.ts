@@ -1,12 +1,13 @@
 /** The full plan check: dimensions, axle loads and limits, securement, markings, jurisdictions, travel windows. */
 import { AxleGroupLoadsResult, SliderRange, SliderSuggestion, TractorAxleGeometry, axleGroupLoads, combinationAxles, suggestSliderPosition } from './axle-group-loads';
 import { AxleCheckResult, AxleInput, checkAxleWeights } from './axle-weights';
-import { JurisdictionAssessment, assessJurisdiction } from './assess-jurisdiction';
+import { JurisdictionAssessment, OpenQuestion, assessJurisdiction } from './assess-jurisdiction';
 import { DeckSection, DimensionsResult, PlacedArticle, overallDimensions } from './dimensions';
 import { JurisdictionRule, RoadType } from './jurisdiction-rule';
 import { MarkingsResult, projectingLoadMarkings } from './markings';
 import { PLANNING_CAUTION, RULEBOOK_CAUTION, Reason, SOURCES } from './reasons';
-import { FEDERAL_DEFAULT_RULE } from './rulebook-samples';
+import { blankRecord } from '../rulebook/blank-record';
+import { jurisdictionByCode } from '../geo/jurisdictions';
 import { SecurementResult, TiedownSpec, checkSecurement } from './securement';
 import { TravelWindowsResult, travelWindows } from './travel-windows';
 import { ABSURD, checkNumber } from './validate';
@@ -68,7 +69,7 @@ export type PlanInput = {
   route: RouteSegment[];
   /** Planned travel days, `YYYY-MM-DD`. */
   travelDates: string[];
-  /** Rulebook records (by code); jurisdictions without one fall back to the federal default. */
+  /** Rulebook records (by code); a jurisdiction without one reads as every topic not on file. */
   rules: JurisdictionRule[];
   registeredGrossLb?: number;
   /** Issued permits' validity windows by jurisdiction code. */
@@ -96,13 +97,29 @@ export type PlanCheckResult = {
     superloads: string[];
     maxEscortsFront: number;
     maxEscortsRear: number;
+    /** Sum of the fees on file. */
     estimatedFeesUsd: number;
+    /** Jurisdictions needing a permit whose fee is not on file (the total is then incomplete). */
+    feesNotOnFile: string[];
+    /** Jurisdictions whose escort answer is not on file for this load. */
+    escortsNotOnFile: string[];
+    /** Every topic this move needs that the rulebook has not on file, until a permit answers it. */
+    openQuestions: OpenQuestion[];
+    /** False when a travel topic of the origin is not on file on some planned day. */
+    earliestDepartureKnown: boolean;
     /** First legal moment to leave, in the first jurisdiction of the route, over the planned dates. */
     earliestDeparture: string | null;
     problems: string[];
   };
   reasons: Reason[];
   cautions: string[];
+};
+
+const TRAVEL_TOPIC_LABELS: Record<string, string> = {
+  daylight: 'travel hours',
+  weekends: 'weekend travel',
+  holidays: 'holiday travel limits',
+  curfews: 'urban curfews',
 };
 
 /** Runs the whole plan and returns every result with its reasons (live feedback in the browser, assessment on the server). */
@@ -193,8 +210,8 @@ export function planCheck(plan: PlanInput): PlanCheckResult {
   const jurisdictions: JurisdictionPlanResult[] = [];
   for (const [code, segs] of byCode) {
     const found = rules.get(code);
-    const rule = found ?? { ...FEDERAL_DEFAULT_RULE, code, name: `${code} (no rulebook record: federal defaults)` };
-    if (!found) problems.push(`${code}: no rulebook record; federal defaults used`);
+    const rule = found ?? blankRecord(code, jurisdictionByCode(code)?.name ?? code, '1970-01-01', 'no rulebook record');
+    if (!found) problems.push(`${code}: no rulebook record; every topic ${'not on file'}`);
     const miles = segs.reduce((s, x) => s + x.miles, 0);
     const roadTypes = [...new Set(segs.map((s) => s.roadType))];
     const assessment = assessJurisdiction(rule, {
@@ -208,7 +225,11 @@ export function planCheck(plan: PlanInput): PlanCheckResult {
     const load = {
       overweightOnly: assessment.overweight && !assessment.oversize,
       overlengthOnly: !assessment.overweight && overLegal.length === 1 && overLegal[0] === 'over-legal-length',
+      widthIn: dimensions.widthIn,
+      heightIn: dimensions.heightIn,
       lengthIn: dimensions.lengthIn,
+      grossLb: axleLoads.grossLb,
+      roadType: roadTypes[0],
     };
     const first = segs[0];
     const urban = segs.some((s) => s.urban === true);
@@ -226,7 +247,14 @@ export function planCheck(plan: PlanInput): PlanCheckResult {
       }),
     );
     if (plan.travelDates.length > 0 && travel.every((t) => !t.allowed)) problems.push(`${code}: no legal travel window on the planned dates`);
-    jurisdictions.push({ ...assessment, miles, roadTypes, ruleFound: found !== undefined, travel });
+    const travelUnknown = [...new Set(travel.flatMap((t) => t.unknownTopics))];
+    const openQuestions = [
+      ...assessment.openQuestions,
+      ...(assessment.permitRequired
+        ? travelUnknown.map((topic) => ({ jurisdiction: code, topic: `travel.${topic}`, message: `${rule.name}: ${TRAVEL_TOPIC_LABELS[topic] ?? topic} not on file — check the permit` }))
+        : []),
+    ];
+    jurisdictions.push({ ...assessment, openQuestions, miles, roadTypes, ruleFound: found !== undefined, travel });
   }
 
   for (const v of federal.violations) problems.push(`federal limit: ${v.message}`);
@@ -238,7 +266,8 @@ export function planCheck(plan: PlanInput): PlanCheckResult {
   for (const t of origin?.travel ?? []) {
     for (const iv of t.intervals) if (earliestDeparture === null || iv.start < earliestDeparture) earliestDeparture = iv.start;
   }
-  const estimatedFeesUsd = Math.round(jurisdictions.reduce((s, j) => s + (j.fee ? j.fee.totalUsd * 100 : 0), 0)) / 100;
+  const estimatedFeesUsd = Math.round(jurisdictions.reduce((s, j) => s + (j.fee?.known ? j.fee.totalUsd * 100 : 0), 0)) / 100;
+  const earliestDepartureKnown = (origin?.travel ?? []).every((t) => t.known);
   const reasons: Reason[] = [
     ...dimensions.reasons,
     ...axleLoads.reasons,
@@ -260,7 +289,11 @@ export function planCheck(plan: PlanInput): PlanCheckResult {
       maxEscortsFront: Math.max(0, ...jurisdictions.map((j) => j.escorts.front)),
       maxEscortsRear: Math.max(0, ...jurisdictions.map((j) => j.escorts.rear)),
       estimatedFeesUsd,
+      feesNotOnFile: jurisdictions.filter((j) => j.fee && !j.fee.known).map((j) => j.code),
+      escortsNotOnFile: jurisdictions.filter((j) => j.permitRequired && !j.escorts.known).map((j) => j.code),
+      openQuestions: jurisdictions.flatMap((j) => j.openQuestions),
       earliestDeparture,
+      earliestDepartureKnown,
       problems,
     },
     reasons,

@@ -6,7 +6,10 @@ export const PLANNING_CAUTION =
 
 /** Shown beside rulebook-derived results. */
 export const RULEBOOK_CAUTION =
-  'Rulebook values are sample data with a source and an as-of date; check the issued permit.';
+  'Rulebook values name their source and the date they were read; a topic not on file must be answered by the permit. The issued permit governs.';
+
+/** How a topic the rulebook lacks reads, everywhere: never as "none". */
+export const NOT_ON_FILE = 'not on file — check the permit';
 
 export type Unit = 'in' | 'ft' | 'lb' | 'usd' | 'min' | 'count' | 'psi';
 
@@ -25,16 +28,6 @@ export type Reason = {
   source: string;
   /** True when the rule comes from sample data rather than a verified source. */
   sample?: boolean;
-};
-
-/** Citation of a rulebook value: where it comes from and when it was read. */
-export type RuleSource = {
-  citation: string;
-  /** Date the value was read, `YYYY-MM-DD`. */
-  asOf: string;
-  /** True when the value is sample data (not read in a published source). */
-  sample?: boolean;
-  note?: string;
 };
 
 export const SOURCES = {

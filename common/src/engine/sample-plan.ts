@@ -1,6 +1,6 @@
 /** An invented demo move: an excavator with its bucket and a dozer blade on a 5-axle lowboy behind a tri-drive tractor. */
 import type { PlanInput } from './plan-check';
-import { SAMPLE_RULE_MD, SAMPLE_RULE_PA, SAMPLE_RULE_TX, SAMPLE_RULE_VA } from './rulebook-samples';
+import { RULEBOOK_DATA } from '../rulebook/data-index';
 
 const FT = 12;
 
@@ -85,6 +85,6 @@ export const SAMPLE_PLAN: PlanInput = {
     { jurisdiction: 'PA', miles: 80, roadType: 'multilane', lat: 39.9, lon: -76.7, timeZone: 'America/New_York' },
   ],
   travelDates: ['2027-05-26', '2027-05-27', '2027-05-28', '2027-05-29', '2027-05-31'],
-  rules: [SAMPLE_RULE_TX, SAMPLE_RULE_VA, SAMPLE_RULE_MD, SAMPLE_RULE_PA],
+  rules: ['TX', 'VA', 'MD', 'PA'].map((c) => RULEBOOK_DATA[c]),
   registeredGrossLb: 80_000,
 };

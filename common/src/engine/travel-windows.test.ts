@@ -1,16 +1,33 @@
-import type { TravelRules } from './jurisdiction-rule';
-import { SAMPLE_RULE_TX, SAMPLE_RULE_VA, SAMPLE_RULE_WA } from './rulebook-samples';
+import { known, openTravel, unknown } from './__fixtures__/facts';
+import type { Curfew, HolidayName, TravelRules } from './jurisdiction-rule';
 import { travelWindows } from './travel-windows';
+
+// Rule shapes as the cited texts word them (the states' own records and their checks live in src/rulebook).
+const SIX: HolidayName[] = ['new-years-day', 'memorial-day', 'independence-day', 'labor-day', 'thanksgiving', 'christmas'];
+const TX_LIKE: TravelRules = { ...openTravel(), daylight: known({ startOffsetMin: -30, endOffsetMin: 30 }, 'Tex. Transp. Code 541.401 wording') };
+const urbanCurfews: Curfew[] = [
+  { area: 'cities and towns', start: '07:00', end: '09:00', appliesIn: 'urban', exempt: { overweightOnly: true, overlengthOnlyMaxIn: 85 * 12 } },
+  { area: 'cities and towns', start: '16:00', end: '18:00', appliesIn: 'urban', exempt: { overweightOnly: true, overlengthOnlyMaxIn: 85 * 12 } },
+];
+const VA_LIKE: TravelRules = {
+  ...openTravel(),
+  daylight: known({ startOffsetMin: 0, endOffsetMin: 0 }, '24VAC20-82-110 wording'),
+  holidays: known({ names: SIX, from: 'noon-weekday-before', observance: 'both' }, '24VAC20-82-110 wording'),
+  curfews: known(urbanCurfews, '24VAC20-82-110 wording'),
+};
+const WA_LIKE: TravelRules = {
+  ...openTravel(),
+  holidays: known({ names: [...SIX, 'day-after-thanksgiving'], from: 'noon-day-before', observance: 'both' }, 'WAC 468-38-175 wording'),
+  minVisibilityFt: known(500, 'WAC 468-38-175 wording'),
+};
+const SAMPLE_RULE_TX = TX_LIKE;
+const SAMPLE_RULE_VA = VA_LIKE;
+const SAMPLE_RULE_WA = WA_LIKE;
 
 const DC = { lat: 38.9, lon: -77.0, timeZone: 'America/New_York' };
 const ATL = { lat: 33.8, lon: -84.4, timeZone: 'America/New_York' };
 const minutes = (hhmm: string) => Number(hhmm.slice(0, 2)) * 60 + Number(hhmm.slice(3));
-const open: TravelRules = {
-  daylight: null,
-  weekends: { allowed: true, source: { citation: 'test', asOf: '2026-12-01' } },
-  holidays: { names: [], from: 'day-only', observance: 'both', source: { citation: 'test', asOf: '2026-12-01' } },
-  curfews: [],
-};
+const open: TravelRules = openTravel();
 
 describe('travelWindows', () => {
   it('Tex. Transp. Code 541.401 + USNO: 30 min before sunrise (07:15) to 30 min after sunset (19:56), Atlanta 2009-09-06, ±3 min', () => {
@@ -81,8 +98,43 @@ describe('travelWindows', () => {
     expect(r.intervals).toHaveLength(n);
   });
 
+  it('not on file is never "open": a record without travel hours says known=false and names the topic', () => {
+    const rule: TravelRules = { ...open, daylight: unknown() };
+    const r = travelWindows({ date: '2024-06-05', ...DC, rule });
+    expect(r.known).toBe(false);
+    expect(r.unknownTopics).toEqual(['daylight']);
+    expect(r.restrictions.some((x) => x.code === 'not-on-file-daylight' && /not on file/.test(x.message))).toBe(true);
+    expect(travelWindows({ date: '2024-06-05', ...DC, rule: open }).known).toBe(true);
+  });
+
+  it('weekend limits not on file matter only on a weekend; urban curfews not on file only on an urban segment', () => {
+    const rule: TravelRules = { ...open, weekends: unknown(), curfews: unknown() };
+    expect(travelWindows({ date: '2024-06-05', ...DC, rule }).known).toBe(true);
+    expect(travelWindows({ date: '2024-06-08', ...DC, rule }).unknownTopics).toEqual(['weekends']);
+    expect(travelWindows({ date: '2024-06-05', ...DC, rule, urban: true }).unknownTopics).toEqual(['curfews']);
+  });
+
+  it('Saturday-after-noon ban: travel until 12:00 on Saturday, none on Sunday', () => {
+    const rule: TravelRules = { ...open, weekends: known({ bans: [{ day: 6, from: '12:00' }, { day: 0 }] }) };
+    const sat = travelWindows({ date: '2024-06-08', ...DC, rule });
+    expect(sat.intervals.map((i) => [i.startLocal, i.endLocal])).toEqual([['00:00', '12:00']]);
+    expect(travelWindows({ date: '2024-06-09', ...DC, rule }).allowed).toBe(false);
+  });
+
+  it('night travel allowed below the stated width: the daylight rule applies only above it', () => {
+    const rule: TravelRules = { ...open, daylight: known({ startOffsetMin: -30, endOffsetMin: 30, appliesAbove: { widthOverIn: 120 } }) };
+    expect(travelWindows({ date: '2024-06-05', ...DC, rule, load: { widthIn: 120 } }).intervals[0].startLocal).toBe('00:00');
+    expect(travelWindows({ date: '2024-06-05', ...DC, rule, load: { widthIn: 121 } }).intervals[0].startLocal).not.toBe('00:00');
+  });
+
+  it('a curfew that crosses midnight (22:00–05:00) takes the evening and the next morning', () => {
+    const rule: TravelRules = { ...open, curfews: known([{ area: 'test county', start: '22:00', end: '05:00', appliesIn: 'everywhere' }]) };
+    const r = travelWindows({ date: '2024-06-05', ...DC, rule });
+    expect(r.intervals.map((i) => [i.startLocal, i.endLocal])).toEqual([['05:00', '22:00']]);
+  });
+
   it('weekend rule: no travel on Saturday when the rule forbids weekends (rulebook data)', () => {
-    const rule: TravelRules = { ...open, weekends: { allowed: false, source: { citation: 'sample data', asOf: '2026-12-01', sample: true } } };
+    const rule: TravelRules = { ...open, weekends: known({ bans: [{ day: 6 }, { day: 0 }] }) };
     expect(travelWindows({ date: '2024-06-08', ...DC, rule }).allowed).toBe(false);
     expect(travelWindows({ date: '2024-06-07', ...DC, rule }).allowed).toBe(true);
   });
@@ -107,7 +159,7 @@ describe('travelWindows', () => {
   });
 
   it('15 U.S.C. 260a: a 7:00 curfew on the spring-forward day is at 7:00 EDT (11:00 UTC)', () => {
-    const rule: TravelRules = { ...open, curfews: [{ start: '07:00', end: '09:00', appliesIn: 'everywhere', source: { citation: 'test', asOf: '2026-12-01' } }] };
+    const rule: TravelRules = { ...open, curfews: known([{ area: 'everywhere', start: '07:00', end: '09:00', appliesIn: 'everywhere' }]) };
     const r = travelWindows({ date: '2024-03-10', ...DC, rule });
     expect(r.intervals[0].end).toBe('2024-03-10T11:00:00.000Z');
   });

@@ -1,7 +1,7 @@
 /** Legal travel windows for one day in one jurisdiction. */
 import { HOLIDAY_NAMES, holidayDayNumber, observedDayNumber } from './holidays';
-import { JurisdictionRule, TravelRules, cite } from './jurisdiction-rule';
-import { Reason } from './reasons';
+import { JurisdictionRule, RoadType, TravelRules, appliesTo, cite, isKnown } from './jurisdiction-rule';
+import { NOT_ON_FILE, Reason } from './reasons';
 import { sunTimesMs, checkLatLon } from './sun-times';
 import { checkTimeZone, dayNumberOf, localClock, weekdayOf, zoneOffsetMinutes, zonedTimeToUtc } from './time-zone';
 import { parseIsoDate } from './validate';
@@ -13,7 +13,12 @@ export type TravelLoadFacts = {
   overweightOnly?: boolean;
   /** Over legal length only (no other dimension or weight over legal). */
   overlengthOnly?: boolean;
+  widthIn?: number;
+  heightIn?: number;
   lengthIn?: number;
+  grossLb?: number;
+  /** Road class travelled (for the record; night-travel and curfew rules may name it). */
+  roadType?: RoadType;
 };
 
 export type TravelWindowsInput = {
@@ -43,6 +48,13 @@ export type TravelInterval = {
 export type TravelWindowsResult = {
   date: string;
   timeZone: string;
+  /**
+   * False when a travel topic this day needs (daylight, weekends, holidays, urban curfews) is not on file: the
+   * intervals then hold only what the topics on file take away, and must not be read as permission.
+   */
+  known: boolean;
+  /** The travel topics not on file (`daylight`, `weekends`, `holidays`, `curfews`). */
+  unknownTopics: string[];
   allowed: boolean;
   intervals: TravelInterval[];
   sunrise: string | null;
@@ -74,6 +86,8 @@ function parseClock(field: string, hhmm: string): number {
   return minutes;
 }
 
+const DAY_NAMES = ['Sunday', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday'];
+
 const isTravelRules = (r: JurisdictionRule | TravelRules): r is TravelRules => !('travel' in r);
 
 /**
@@ -101,8 +115,18 @@ export function travelWindows(input: TravelWindowsInput): TravelWindowsResult {
   const sun = sunTimesMs(y, m, d, input.lat, input.lon);
   let spans: Span[] = [[dayStart, dayEnd]];
 
-  if (travel.daylight) {
-    const dl = travel.daylight;
+  const load = input.load ?? {};
+  const unknownTopics: string[] = [];
+  const notOnFile = (topic: string, what: string): void => {
+    unknownTopics.push(topic);
+    restrictions.push({ code: `not-on-file-${topic}`, message: `${who}: ${what} ${NOT_ON_FILE}`, source: 'not on file' });
+  };
+  const dims = { widthIn: load.widthIn, heightIn: load.heightIn, lengthIn: load.lengthIn, grossLb: load.grossLb };
+
+  const daylight = travel.daylight;
+  if (!isKnown(daylight)) notOnFile('daylight', 'travel hours');
+  else if (daylight.value && appliesTo(daylight.value.appliesAbove, dims)) {
+    const dl = daylight.value;
     let from: number;
     let to: number;
     if (sun.sunrise !== null && sun.sunset !== null) {
@@ -110,7 +134,7 @@ export function travelWindows(input: TravelWindowsInput): TravelWindowsResult {
       to = sun.sunset + dl.endOffsetMin * MIN;
     } else {
       from = sun.alwaysUp ? dayStart : dayEnd;
-      to = sun.alwaysUp ? dayEnd : dayEnd;
+      to = dayEnd;
     }
     const fmtOff = (o: number, what: string): string => (o === 0 ? what : `${Math.abs(o)} min ${o < 0 ? 'before' : 'after'} ${what}`);
     const msg = `${who}: daylight travel only, ${fmtOff(dl.startOffsetMin, 'sunrise')} to ${fmtOff(dl.endOffsetMin, 'sunset')} (${localClock(
@@ -118,21 +142,34 @@ export function travelWindows(input: TravelWindowsInput): TravelWindowsResult {
       tz,
     )}–${localClock(Math.min(to, dayEnd - 1), tz)})`;
     spans = subtract(subtract(spans, [dayStart, Math.max(dayStart, from)]), [Math.min(to, dayEnd), dayEnd]);
-    restrictions.push({ code: 'daylight', message: msg, source: cite(dl.source), sample: dl.source.sample });
+    restrictions.push({ code: 'daylight', message: msg, source: cite(daylight) });
+  } else if (daylight.value) {
+    reasons.push({ code: 'night-allowed', message: `${who}: this load is under the daylight-only dimensions; travel at any hour`, source: cite(daylight) });
   }
 
-  if (!travel.weekends.allowed && (dow === 0 || dow === 6)) {
-    spans = [];
-    restrictions.push({
-      code: 'weekend',
-      message: `${who}: no travel on ${dow === 0 ? 'Sunday' : 'Saturday'}`,
-      source: cite(travel.weekends.source),
-      sample: travel.weekends.source.sample,
-    });
+  const weekends = travel.weekends;
+  if (!isKnown(weekends)) {
+    if (dow === 0 || dow === 6) notOnFile('weekends', 'weekend travel');
+  } else if (appliesTo(weekends.value.appliesAbove, dims)) {
+    for (const ban of weekends.value.bans) {
+      if (ban.day !== dow) continue;
+      const fromMin = ban.from ? parseClock('weekends.from', ban.from) : 0;
+      const toMin = ban.to ? parseClock('weekends.to', ban.to) : 24 * 60;
+      spans = subtract(spans, [at(day, fromMin), toMin >= 24 * 60 ? dayEnd : at(day, toMin)]);
+      const dayName = DAY_NAMES[dow];
+      restrictions.push({
+        code: 'weekend',
+        message: `${who}: no travel on ${dayName}${ban.from || ban.to ? ` ${ban.from ?? '00:00'}–${ban.to ?? '24:00'}` : ''}`,
+        source: cite(weekends),
+      });
+    }
   }
 
-  const hol = travel.holidays;
-  if (hol.names.length > 0 && spans.length > 0) {
+  const holidays = travel.holidays;
+  if (!isKnown(holidays)) notOnFile('holidays', 'holiday travel limits');
+  else if (holidays.value.names.length > 0 && spans.length > 0 && appliesTo(holidays.value.appliesAbove, dims)) {
+    const hol = holidays.value;
+    const untilMin = hol.until ? parseClock('holidays.until', hol.until) : 24 * 60;
     const years = m === 12 ? [y, y + 1] : m === 1 ? [y - 1, y] : [y];
     const seen = new Set<string>();
     for (const name of hol.names) {
@@ -154,45 +191,45 @@ export function travelWindows(input: TravelWindowsInput): TravelWindowsResult {
             startMin = 12 * 60;
           }
           if (day < startDay || day > h) continue;
-          const cut: Span = [at(startDay, startMin), at(h + 1, 0)];
+          const cut: Span = [at(startDay, startMin), untilMin >= 24 * 60 ? at(h + 1, 0) : at(h, untilMin)];
           spans = subtract(spans, cut);
           const label = `${HOLIDAY_NAMES[name]}${h !== actual ? ' (observed)' : ''}`;
           const when =
             hol.from === 'day-only'
               ? 'the holiday itself'
               : `from noon ${hol.from === 'noon-weekday-before' ? 'the weekday' : 'the day'} before through the holiday`;
-          restrictions.push({
-            code: 'holiday',
-            message: `${who}: no travel for ${label}, ${when}`,
-            source: cite(hol.source),
-            sample: hol.source.sample,
-          });
+          restrictions.push({ code: 'holiday', message: `${who}: no travel for ${label}, ${when}${hol.until ? ` until ${hol.until}` : ''}`, source: cite(holidays) });
         }
       }
     }
   }
 
-  for (const c of travel.curfews) {
-    if (spans.length === 0) break;
-    if (c.appliesIn === 'urban' && !input.urban) continue;
-    if (c.days && !c.days.includes(dow)) continue;
-    const load = input.load ?? {};
-    if (c.exempt?.overweightOnly && load.overweightOnly) {
-      reasons.push({ code: 'curfew-exempt', message: `${who}: curfew ${c.start}–${c.end} does not apply to an overweight-only load`, source: cite(c.source) });
-      continue;
+  const curfews = travel.curfews;
+  if (!isKnown(curfews)) {
+    if (input.urban) notOnFile('curfews', 'urban curfews');
+  } else {
+    for (const c of curfews.value) {
+      if (spans.length === 0) break;
+      if (c.appliesIn === 'urban' && !input.urban) continue;
+      if (!appliesTo(c.appliesAbove, dims)) continue;
+      if (c.exempt?.overweightOnly && load.overweightOnly) {
+        reasons.push({ code: 'curfew-exempt', message: `${who}: ${c.area} curfew ${c.start}–${c.end} does not apply to an overweight-only load`, source: cite(curfews) });
+        continue;
+      }
+      if (c.exempt?.overlengthOnlyMaxIn !== undefined && load.overlengthOnly && (load.lengthIn ?? Infinity) <= c.exempt.overlengthOnlyMaxIn) {
+        reasons.push({ code: 'curfew-exempt', message: `${who}: ${c.area} curfew ${c.start}–${c.end} does not apply to an overlength-only load of this length`, source: cite(curfews) });
+        continue;
+      }
+      const a = parseClock('curfew.start', c.start);
+      const b = parseClock('curfew.end', c.end);
+      const cuts: Span[] = [];
+      // a curfew that starts on this day, and the tail of one that started the day before and crosses midnight
+      if (!c.days || c.days.includes(dow)) cuts.push([at(day, a), b > a ? at(day, b) : dayEnd]);
+      if (b < a && (!c.days || c.days.includes((dow + 6) % 7))) cuts.push([dayStart, at(day, b)]);
+      if (cuts.length === 0) continue;
+      for (const cut of cuts) spans = subtract(spans, cut);
+      restrictions.push({ code: 'curfew', message: `${who}: ${c.area} ${c.appliesIn === 'urban' ? 'urban ' : ''}curfew, no travel ${c.start}–${c.end}`, source: cite(curfews) });
     }
-    if (c.exempt?.overlengthOnlyMaxIn !== undefined && load.overlengthOnly && (load.lengthIn ?? Infinity) <= c.exempt.overlengthOnlyMaxIn) {
-      reasons.push({ code: 'curfew-exempt', message: `${who}: curfew ${c.start}–${c.end} does not apply to an overlength-only load of this length`, source: cite(c.source) });
-      continue;
-    }
-    const cut: Span = [at(day, parseClock('curfew.start', c.start)), at(day, parseClock('curfew.end', c.end))];
-    spans = subtract(spans, cut);
-    restrictions.push({
-      code: 'curfew',
-      message: `${who}: ${c.appliesIn === 'urban' ? 'urban ' : ''}curfew, no travel ${c.start}–${c.end}`,
-      source: cite(c.source),
-      sample: c.source.sample,
-    });
   }
 
   if (input.permitValidity) {
@@ -207,14 +244,9 @@ export function travelWindows(input: TravelWindowsInput): TravelWindowsResult {
     }
   }
 
-  if (travel.minVisibilityFt) {
-    reasons.push({
-      code: 'visibility',
-      message: `${who}: no movement when visibility is reduced to ${travel.minVisibilityFt.value} ft`,
-      value: travel.minVisibilityFt.value,
-      unit: 'ft',
-      source: cite(travel.minVisibilityFt.source),
-    });
+  const vis = travel.minVisibilityFt;
+  if (isKnown(vis) && vis.value !== null) {
+    reasons.push({ code: 'visibility', message: `${who}: no movement when visibility is reduced to ${vis.value} ft`, value: vis.value, unit: 'ft', source: cite(vis) });
   }
 
   const intervals: TravelInterval[] = spans
@@ -228,6 +260,8 @@ export function travelWindows(input: TravelWindowsInput): TravelWindowsResult {
   return {
     date: input.date,
     timeZone: tz,
+    known: unknownTopics.length === 0,
+    unknownTopics,
     allowed: intervals.length > 0,
     intervals,
     sunrise: sun.sunrise === null ? null : new Date(sun.sunrise).toISOString(),
