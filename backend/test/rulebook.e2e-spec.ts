@@ -1,4 +1,8 @@
-import { JURISDICTIONS, SAMPLE_RULE_TX, type Role } from '@amberline/common';
+import { JURISDICTIONS, RULEBOOK_DATA, type Role } from '@amberline/common';
+
+const leadTime = (days: number) => ({
+  status: 'sourced', value: days, citation: 'test: lead time per the state', url: 'https://example.org/test', edition: 'test', asOf: '2026-12-02',
+});
 import { seedTractor, seedTrailer } from '@amberline/seed';
 import { texasMove } from './fixtures/moves';
 import { createTestApp, type TestApp } from './utils/create-test-app';
@@ -23,22 +27,35 @@ describe('/api/rulebook', () => {
       expect(j.version).toBeGreaterThanOrEqual(1);
       expect(j.asOf).toMatch(/^\d{4}-\d{2}-\d{2}$/);
     }
-    const tx = await t.http().get('/api/rulebook/jurisdictions/TX').set(as('permit_clerk'));
-    expect(tx.body.record.legal.source.citation).toMatch(/23 U\.S\.C\. 127/);
-    // TxDMV escort table: width over 14 ft (168 in) asks for an escort (references.md §4)
-    expect(tx.body.record.escorts.rules.some((r: { when: { measure: string; over?: number } }) => r.when.measure === 'width' && r.when.over === 168)).toBe(true);
+    // version 1 of each is its data file, as shipped
+    const ga = await t.http().get('/api/rulebook/jurisdictions/GA').set(as('permit_clerk'));
+    expect(ga.body.record).toEqual(RULEBOOK_DATA.GA);
+    expect(ga.body.record.schema).toBe(2);
+  });
+
+  it('coverage: jurisdictions × topics, each cell sourced / secondary / partial / unknown, with counts and the oldest as-of date', async () => {
+    const res = await t.http().get('/api/rulebook/coverage').set(as('dispatcher'));
+    expect(res.status).toBe(200);
+    expect(res.body.rows).toHaveLength(49);
+    expect(res.body.topics.map((x: { key: string }) => x.key)).toEqual(expect.arrayContaining(['escorts', 'fee', 'travel.hours']));
+    const t0 = res.body.totals;
+    expect(t0.sourced + t0.secondary + t0.unknown).toBe(t0.facts);
+    expect(t0.facts).toBe(49 * 36);
+    for (const r of res.body.rows) for (const c of r.cells) expect(['sourced', 'secondary', 'partial', 'unknown']).toContain(c.status);
+    expect((await t.http().get('/api/rulebook/coverage').set(as('driver'))).status).toBe(403);
   });
 
   it('an edit creates a new version and keeps the old one; the move assessment records the version it used', async () => {
     const before = (await t.http().get('/api/rulebook/jurisdictions/OK').set(as('admin'))).body;
-    const record = { ...before.record, permit: { ...before.record.permit, leadTimeDays: before.record.permit.leadTimeDays + 1 } };
+    const record = { ...before.record, permit: { ...before.record.permit, leadTimeDays: leadTime(4) } };
     const res = await t.http().put('/api/rulebook/jurisdictions/OK').set(as('admin')).send({ record, note: 'lead time checked with the state' });
     expect(res.status).toBe(200);
     expect(res.body.version).toBe(before.version + 1);
     const versions = (await t.http().get('/api/rulebook/jurisdictions/OK/versions').set(as('dispatcher'))).body;
     expect(versions.map((v: { version: number }) => v.version).slice(0, 2)).toEqual([before.version + 1, before.version]);
     expect(versions[0].note).toBe('lead time checked with the state');
-    expect(versions[1].record.permit.leadTimeDays).toBe(before.record.permit.leadTimeDays);
+    expect(versions[1].record.permit.leadTimeDays).toEqual(before.record.permit.leadTimeDays);
+    expect(versions[0].record.permit.leadTimeDays.value).toBe(4);
   });
 
   it('a saved move\'s assessment follows a rule edit at once (results are keyed by rule version, not kept stale)', async () => {
@@ -56,9 +73,10 @@ describe('/api/rulebook', () => {
     const first = await okOf();
     expect(await okOf()).toEqual(first); // asked twice, the same answer
     const current = (await t.http().get('/api/rulebook/jurisdictions/OK').set(as('admin'))).body;
-    const record = { ...current.record, permit: { ...current.record.permit, leadTimeDays: current.record.permit.leadTimeDays + 3 } };
+    const next = (current.record.permit.leadTimeDays.value ?? 0) + 3;
+    const record = { ...current.record, permit: { ...current.record.permit, leadTimeDays: leadTime(next) } };
     await t.http().put('/api/rulebook/jurisdictions/OK').set(as('admin')).send({ record, note: 'lead time per the state' }).expect(200);
-    expect(await okOf()).toEqual({ version: current.version + 1, leadTime: current.record.permit.leadTimeDays + 3 });
+    expect(await okOf()).toEqual({ version: current.version + 1, leadTime: next });
   });
 
   it.each([
@@ -66,7 +84,7 @@ describe('/api/rulebook', () => {
     ['permit_clerk', 403],
     ['driver', 403],
   ] as [Role, number][])('%s may not edit rules (%i)', async (role, status) => {
-    const res = await t.http().put('/api/rulebook/jurisdictions/TX').set(as(role)).send({ record: SAMPLE_RULE_TX, note: 'try' });
+    const res = await t.http().put('/api/rulebook/jurisdictions/TX').set(as(role)).send({ record: RULEBOOK_DATA.TX, note: 'try' });
     expect(res.status).toBe(status);
   });
 
@@ -76,8 +94,22 @@ describe('/api/rulebook', () => {
 
   it.each([
     ['a record for another state', (r: Record<string, unknown>) => ({ ...r, code: 'OK' }), 'record.code'],
-    ['a negative legal width', (r: Record<string, unknown>) => ({ ...r, legal: { ...(r.legal as object), widthIn: -1 } }), 'record.legal.widthIn'],
-    ['a missing travel section', (r: Record<string, unknown>) => ({ ...r, travel: undefined }), 'record.travel'],
+    ['a negative legal width', (r: any) => ({ ...r, legal: { ...r.legal, widthIn: { ...leadTime(-1) } } }), 'record.legal.widthIn.value'],
+    ['a missing travel section', (r: any) => ({ ...r, travel: undefined }), 'record.travel'],
+    ['a value with no source', (r: any) => ({ ...r, fee: { status: 'sourced', value: { baseUsd: 60 } } }), 'record.fee.citation'],
+    ['an unknown status with a value', (r: any) => ({ ...r, legal: { ...r.legal, heightIn: { status: 'unknown', note: 'not read', value: 168 } } }), 'record.legal.heightIn.value'],
+    ['an absurd limit', (r: any) => ({ ...r, legal: { ...r.legal, grossLb: { ...leadTime(8_000_000) } } }), 'record.legal.grossLb.value'],
+    [
+      'a curfew with no area',
+      (r: any) => ({ ...r, travel: { ...r.travel, curfews: { ...leadTime(0), value: [{ start: '07:00', end: '09:00', appliesIn: 'urban' }] } } }),
+      'record.travel.curfews.value[0].area',
+    ],
+    [
+      'an unknown holiday name',
+      (r: any) => ({ ...r, travel: { ...r.travel, holidays: { ...leadTime(0), value: { names: ['arbor-day'], from: 'day-only', observance: 'actual' } } } }),
+      'record.travel.holidays.value.names[0]',
+    ],
+    ['an impossible calendar date', (r: any) => ({ ...r, asOf: '2026-02-30' }), 'record.asOf'],
   ])('rejects %s with 400 naming the field and keeps the version', async (_l, change, field) => {
     const cur = (await t.http().get('/api/rulebook/jurisdictions/TX').set(as('admin'))).body;
     const res = await t.http().put('/api/rulebook/jurisdictions/TX').set(as('admin')).send({ record: change(cur.record), note: 'bad edit' });

@@ -22,6 +22,7 @@ export type PermitRow = {
   estimated_fee_cents: number | null;
   actual_fee_cents: number | null;
   lead_time_days: number;
+  lead_time_known: boolean;
   assignee_id: string | null;
   assignee_name: string | null;
   amendment_reason: string | null;
@@ -43,7 +44,7 @@ export type PermitRow = {
  */
 export const permitSummarySql = (permits = 'permits') => `
   SELECT p.id, p.version, p.move_id, p.jurisdiction, p.permit_type, p.status, p.needed, p.permit_number, p.valid_from, p.valid_to,
-         p.estimated_fee_cents, p.actual_fee_cents, p.lead_time_days, p.assignee_id, u.name AS assignee_name, p.amendment_reason,
+         p.estimated_fee_cents, p.actual_fee_cents, p.lead_time_days, p.lead_time_known, p.assignee_id, u.name AS assignee_name, p.amendment_reason,
          p.expiry_warning, p.updated_at, m.reference AS move_reference, m.stage AS move_stage, m.customer,
          to_char(m.requested_departure, 'YYYY-MM-DD') AS departure,
          to_char(m.requested_departure - p.lead_time_days, 'YYYY-MM-DD') AS file_by,
@@ -75,7 +76,7 @@ export function toSummaryDto(r: PermitRow, now: Date): PermitSummaryDto {
     permitNumber: r.permit_number,
     departure: r.departure,
     fileBy: r.file_by,
-    leadTimeDays: r.lead_time_days,
+    leadTimeDays: r.lead_time_known ? r.lead_time_days : null,
     urgency,
     daysToFileBy: daysLeft,
     validFrom: r.valid_from ? new Date(r.valid_from).toISOString() : null,
@@ -142,13 +143,13 @@ export function snapshotOf(p: {
   status: PermitStatus; permitType: PermitType; permitNumber: string | null; issuedAt: Date | null; filedAt: Date | null; validFrom: Date | null; validTo: Date | null;
   permitted: unknown; routeText: string | null; conditions: PermitConditions; conditionsText: string | null; estimatedFeeCents: number | null; actualFeeCents: number | null;
   assigneeId: string | null; notes: string | null; amendmentReason: string | null; needed: boolean; refundable: boolean | null; ruleVersion: number | null;
-  leadTimeDays: number; expiryWarning: string | null;
+  leadTimeDays: number; leadTimeKnown?: boolean; expiryWarning: string | null;
 }): Record<string, unknown> {
   const iso = (d: Date | null) => (d ? d.toISOString() : null);
   return {
     status: p.status, permitType: p.permitType, permitNumber: p.permitNumber, filedAt: iso(p.filedAt), issuedAt: iso(p.issuedAt), validFrom: iso(p.validFrom), validTo: iso(p.validTo),
     permitted: p.permitted, routeText: p.routeText, conditions: p.conditions, conditionsText: p.conditionsText, estimatedFeeCents: p.estimatedFeeCents,
     actualFeeCents: p.actualFeeCents, assigneeId: p.assigneeId, notes: p.notes, amendmentReason: p.amendmentReason, needed: p.needed,
-    refundable: p.refundable, ruleVersion: p.ruleVersion, leadTimeDays: p.leadTimeDays, expiryWarning: p.expiryWarning,
+    refundable: p.refundable, ruleVersion: p.ruleVersion, leadTimeDays: p.leadTimeDays, leadTimeKnown: p.leadTimeKnown ?? true, expiryWarning: p.expiryWarning,
   };
 }

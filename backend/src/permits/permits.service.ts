@@ -209,7 +209,7 @@ export class PermitsService implements OnModuleInit {
     for (const j of assessment.result.jurisdictions) {
       const existing = byCode.get(j.code);
       byCode.delete(j.code);
-      const estimate = j.fee ? cents(j.fee.totalUsd) : null;
+      const estimate = j.fee?.known ? cents(j.fee.totalUsd) : null;
       const ruleVersion = assessment.ruleVersions[j.code] ?? null;
       if (j.permitRequired && !existing) {
         const roads = move.route.filter((s) => s.jurisdiction === j.code).map((s) => `${s.roads} (${s.miles} mi)`).join('; ');
@@ -221,11 +221,12 @@ export class PermitsService implements OnModuleInit {
           version: 1,
           needed: true,
           estimatedFeeCents: estimate,
-          refundable: j.fee?.refundable ?? null,
+          refundable: j.fee?.known ? j.fee.refundable : null,
           ruleVersion,
-          leadTimeDays: j.permit.leadTimeDays,
+          leadTimeDays: j.permit.leadTimeDays ?? 0,
+          leadTimeKnown: j.permit.leadTimeDays !== null,
           routeText: roads || null,
-          conditions: { escortsFront: j.escorts.front, escortsRear: j.escorts.rear, heightPole: j.escorts.heightPole },
+          conditions: { escortsKnown: j.escorts.known, escortsFront: j.escorts.front, escortsRear: j.escorts.rear, heightPole: j.escorts.heightPole },
         });
         const saved = await m.save(p);
         await m.insert(PermitVersion, { permitId: saved.id, version: 1, status: 'to_file', snapshot: snapshotOf(saved), reason: why, createdById: actor?.id ?? null });
@@ -248,10 +249,11 @@ export class PermitsService implements OnModuleInit {
       }
       if (existing.status === 'to_file' || existing.status === 'rejected') {
         next.estimatedFeeCents = estimate;
-        next.refundable = j.fee?.refundable ?? null;
+        next.refundable = j.fee?.known ? j.fee.refundable : null;
         next.ruleVersion = ruleVersion;
       }
-      next.leadTimeDays = j.permit.leadTimeDays;
+      next.leadTimeDays = j.permit.leadTimeDays ?? 0;
+      next.leadTimeKnown = j.permit.leadTimeDays !== null;
       if (j.permitRequired && existing.permitted && (existing.status === 'filed' || existing.status === 'issued' || existing.status === 'needs_amendment')) {
         reasons.push(...permittedDifferences(existing.permitted, factsFromAssessment(assessment, j.code, move.planRevision)));
         if (existing.validFrom && existing.validTo && existing.status !== 'filed') {
@@ -326,7 +328,7 @@ export class PermitsService implements OnModuleInit {
           next.permitted = factsFromAssessment(assessment, before.jurisdiction, move.planRevision);
           next.filedAt = now;
           const j = assessment.result.jurisdictions.find((x) => x.code === before.jurisdiction);
-          if (j?.fee) next.estimatedFeeCents = cents(j.fee.totalUsd);
+          if (j?.fee) next.estimatedFeeCents = j.fee.known ? cents(j.fee.totalUsd) : null;
         }
         if (dto.status === 'issued') {
           if (!next.permitNumber) throw fieldError('permitNumber', 'record the permit number the state issued');

@@ -3,8 +3,8 @@ import { InjectRepository } from '@nestjs/typeorm';
 import { LRUCache } from 'lru-cache';
 import { DataSource, Repository } from 'typeorm';
 import {
-  assessJurisdiction, FEDERAL_DEFAULT_RULE, validateJurisdictionRule, JURISDICTIONS, jurisdictionByCode, SAMPLE_RULES,
-  type JurisdictionRule, type JurisdictionSummaryDto, type RuleVersionDto, type SessionUser,
+  assessJurisdiction, blankRecord, coverageRow, factsOf, rulebookCoverage, validateJurisdictionRule, JURISDICTIONS, jurisdictionByCode, RULEBOOK_DATA,
+  type JurisdictionRule, type JurisdictionSummaryDto, type RuleVersionDto, type RulebookCoverage, type SessionUser,
 } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
 import { preparedQuery } from '../database/prepared';
@@ -12,12 +12,15 @@ import { AppException, fieldError } from '../core/app-exception';
 import { Jurisdiction } from './entities/jurisdiction.entity';
 import { RuleVersion } from './entities/rule-version.entity';
 
-/** The starting record of a jurisdiction: the sample record where we have one, else the federal defaults. */
+/** The starting record of a jurisdiction: its data file (`common/src/rulebook/data`), else every topic not on file. */
 export function initialRecord(code: string, name: string): JurisdictionRule {
-  const sample = SAMPLE_RULES[code];
-  if (sample) return sample;
-  return { ...FEDERAL_DEFAULT_RULE, code, name, sample: true };
+  return RULEBOOK_DATA[code] ?? blankRecord(code, name, new Date().toISOString().slice(0, 10), 'no data file for this jurisdiction');
 }
+
+/** True when no value of the record is on file (the `sample` column: nothing in it has been read in a text). */
+const nothingOnFile = (r: JurisdictionRule): boolean => factsOf(r).every(([, f]) => f.status === 'unknown');
+/** Records written before every value was a fact (schema 1) carry defaults that read as "none". */
+const isCurrentSchema = (r: unknown): boolean => !!r && typeof r === 'object' && (r as { schema?: unknown }).schema === 2;
 
 const toVersionDto = (v: RuleVersion): RuleVersionDto => ({
   code: v.code, version: v.version, record: v.record, note: v.note, createdBy: v.createdBy?.name ?? null, createdAt: v.createdAt.toISOString(),
@@ -70,18 +73,44 @@ export class RulebookService implements OnApplicationBootstrap {
       for (const j of missing) {
         const record = initialRecord(j.code, j.name);
         await m.insert(Jurisdiction, { code: j.code, name: j.name, currentVersion: 1 });
-        await m.insert(RuleVersion, { code: j.code, version: 1, record, sample: record.sample, asOf: record.asOf, note: 'initial record', createdById: null });
+        await m.insert(RuleVersion, { code: j.code, version: 1, record, sample: nothingOnFile(record), asOf: record.asOf, note: 'initial record (rulebook data file)', createdById: null });
       }
       if (missing.length) this.logger.log(`rulebook: added ${missing.length} jurisdictions`);
+      // a database started before records were facts: its current records get the data files as a new version
+      const stale: { code: string; current_version: number }[] = await m.query(
+        `SELECT j.code, j.current_version FROM jurisdictions j JOIN rule_versions v ON v.code = j.code AND v.version = j.current_version
+          WHERE NOT (v.record ? 'schema') OR v.record->>'schema' <> '2'`,
+      );
+      for (const s of stale) {
+        const record = initialRecord(s.code, jurisdictionByCode(s.code)?.name ?? s.code);
+        const version = s.current_version + 1;
+        await m.insert(RuleVersion, { code: s.code, version, record, sample: nothingOnFile(record), asOf: record.asOf, note: 'sourced rulebook: every value with its own source, not on file where none was read', createdById: null });
+        await m.update(Jurisdiction, { code: s.code }, { currentVersion: version });
+      }
+      if (stale.length) this.logger.log(`rulebook: ${stale.length} records moved to the sourced rulebook`);
     });
   }
 
+  /** Jurisdictions × topics: each cell sourced, secondary, partly or not on file; the counts; the oldest as-of date. */
+  async coverage(): Promise<RulebookCoverage> {
+    const rows: { version: number; record: JurisdictionRule }[] = await this.ds.query(
+      `SELECT v.version, v.record FROM jurisdictions j JOIN rule_versions v ON v.code = j.code AND v.version = j.current_version ORDER BY j.code`,
+    );
+    return rulebookCoverage(rows.filter((r) => isCurrentSchema(r.record)).map((r) => ({ record: r.record, version: r.version })));
+  }
+
   async list(): Promise<JurisdictionSummaryDto[]> {
-    const rows: { code: string; name: string; version: number; sample: boolean; as_of: string; created_at: Date }[] = await this.ds.query(
-      `SELECT j.code, j.name, v.version, v.sample, to_char(v.as_of, 'YYYY-MM-DD') AS as_of, v.created_at
+    const rows: { code: string; name: string; version: number; sample: boolean; as_of: string; created_at: Date; record: JurisdictionRule }[] = await this.ds.query(
+      `SELECT j.code, j.name, v.version, v.sample, to_char(v.as_of, 'YYYY-MM-DD') AS as_of, v.created_at, v.record
          FROM jurisdictions j JOIN rule_versions v ON v.code = j.code AND v.version = j.current_version ORDER BY j.name`,
     );
-    return rows.map((r) => ({ code: r.code, name: r.name, version: r.version, sample: r.sample, asOf: r.as_of, updatedAt: new Date(r.created_at).toISOString() }));
+    return rows.map((r) => {
+      const c = isCurrentSchema(r.record) ? coverageRow(r.record) : null;
+      return {
+        code: r.code, name: r.name, version: r.version, sample: r.sample, asOf: r.as_of, updatedAt: new Date(r.created_at).toISOString(),
+        facts: { sourced: c?.sourced ?? 0, secondary: c?.secondary ?? 0, unknown: c?.unknown ?? 0 },
+      };
+    });
   }
 
   async current(code: string): Promise<RuleVersionDto> {
@@ -134,7 +163,7 @@ export class RulebookService implements OnApplicationBootstrap {
       const j = await m.findOne(Jurisdiction, { where: { code }, lock: { mode: 'pessimistic_write' } });
       if (!j) throw new AppException(404, 'not_found', `No jurisdiction ${code}`);
       const version = j.currentVersion + 1;
-      const inserted = await m.insert(RuleVersion, { code, version, record, sample: !!record.sample, asOf: record.asOf, note, createdById: actor.id });
+      const inserted = await m.insert(RuleVersion, { code, version, record, sample: nothingOnFile(record), asOf: record.asOf, note, createdById: actor.id });
       await m.update(Jurisdiction, { code }, { currentVersion: version });
       await this.audit.record(m, { entity: 'rule', entityId: code, action: 'new_version', actorId: actor.id, before: { version: j.currentVersion }, after: { version }, reason: note });
       return inserted.identifiers[0].id as string;

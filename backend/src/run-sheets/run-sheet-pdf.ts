@@ -87,11 +87,16 @@ export function renderRunSheetPdf(s: RunSheetDto): Doc {
   heading(doc, 'Route');
   for (const seg of m.route) line(doc, `${seg.order}. ${seg.jurisdiction} — ${seg.roads} — ${seg.miles} mi — ${seg.roadType}${seg.urban ? ' (urban)' : ''}${seg.place ? ` — near ${seg.place}` : ''}`);
 
+  if (s.openQuestions.length) {
+    heading(doc, 'Not on file — check the permit');
+    for (const q of s.openQuestions) line(doc, `[not on file] ${q.message}`, '#92400e');
+  }
+
   heading(doc, 'Travel windows (local time)');
   if (s.earliestDeparture) line(doc, `Earliest legal departure: ${s.earliestDeparture.replace('T', ' ').slice(0, 16)} UTC`);
   for (const j of s.travel) {
     for (const d of j.days) {
-      const spans = d.intervals.map((iv) => `${iv.startLocal}–${iv.endLocal}`).join(', ') || 'no travel';
+      const spans = (d.intervals.map((iv) => `${iv.startLocal}–${iv.endLocal}`).join(', ') || 'no travel') + (d.known ? '' : ` [not on file: ${d.unknownTopics.join(', ')} — check the permit]`);
       const why = d.restrictions.map((r) => r.message).join('; ');
       line(doc, `${j.jurisdiction} ${d.date}: ${spans}${why ? ` — ${why}` : ''}`);
     }

@@ -104,6 +104,8 @@ export class RunSheetsService implements OnModuleInit {
       axles: { steerLb: r.axleLoads.steerLb, driveLb: r.axleLoads.driveLb, trailerLb: r.axleLoads.trailerLb, grossLb: r.axleLoads.grossLb, sliderSettingFt: move.sliderSettingFt, federal: r.federal },
       travel: r.jurisdictions.map((j) => ({ jurisdiction: j.code, name: j.name, days: j.travel })),
       earliestDeparture: r.summary.earliestDeparture,
+      earliestDepartureKnown: r.summary.earliestDepartureKnown,
+      openQuestions: r.summary.openQuestions,
       permits,
       escorts,
       gaugeCalibration: trailer.spec.gaugeCalibration,

@@ -62,6 +62,8 @@ export type PermittedFacts = {
 
 /** Conditions printed on a permit, in a form the run sheet can use; anything else goes to `conditionsText`. */
 export type PermitConditions = {
+  /** False when the rulebook had the escort answer not on file for this load (counts are then a floor). */
+  escortsKnown?: boolean;
   escortsFront?: number;
   escortsRear?: number;
   heightPole?: boolean;
@@ -170,7 +172,8 @@ export type PermitSummaryDto = {
   departure: string;
   /** Departure minus the state's lead time, `YYYY-MM-DD`. */
   fileBy: string;
-  leadTimeDays: number;
+  /** Null when the state's lead time is not on file (the file-by date is then the departure itself). */
+  leadTimeDays: number | null;
   urgency: PermitUrgency;
   daysToFileBy: number;
   validFrom: string | null;

@@ -8,6 +8,8 @@ export type JurisdictionSummaryDto = {
   sample: boolean;
   asOf: string;
   updatedAt: string;
+  /** How many values of the current record are sourced, secondary or not on file. */
+  facts: { sourced: number; secondary: number; unknown: number };
 };
 
 export type RuleVersionDto = {

@@ -1,3 +1,4 @@
+import type { OpenQuestion } from '../engine/assess-jurisdiction';
 import type { DimensionsResult } from '../engine/dimensions';
 import type { GaugeEstimate } from '../engine/air-gauge';
 import type { MarkingsResult } from '../engine/markings';
@@ -73,6 +74,10 @@ export type RunSheetDto = {
   axles: { steerLb: number; driveLb: number; trailerLb: number; grossLb: number; sliderSettingFt: number | null; federal: PlanCheckResult['federal'] };
   travel: { jurisdiction: string; name: string; days: TravelWindowsResult[] }[];
   earliestDeparture: string | null;
+  /** False when a travel topic of the first state is not on file: the departure time is then not the answer. */
+  earliestDepartureKnown: boolean;
+  /** Rulebook topics not on file for this load, per state, until a permit answers them. */
+  openQuestions: OpenQuestion[];
   permits: RunSheetPermit[];
   escorts: RunSheetEscort[];
   gaugeCalibration: { psi: number; loadLb: number }[];

@@ -4,6 +4,7 @@ import { PermitsAndPayments1764630000000 } from './1764630000000-permits-and-pay
 import { RunSheets1764650000000 } from './1764650000000-run-sheets';
 import { PermitQueueOrder1764660000000 } from './1764660000000-permit-queue-order';
 import { EscortsAndMail1764640000000 } from './1764640000000-escorts-and-mail';
+import { RulebookFacts1764670000000 } from './1764670000000-rulebook-facts';
 
 /** Every migration, in order. Add new ones at the end; never edit one that has landed. */
 export const MIGRATIONS = [
@@ -13,4 +14,5 @@ export const MIGRATIONS = [
   EscortsAndMail1764640000000,
   RunSheets1764650000000,
   PermitQueueOrder1764660000000,
+  RulebookFacts1764670000000,
 ];

@@ -28,6 +28,8 @@ export class Permit {
   @Column({ type: 'boolean', nullable: true }) refundable: boolean | null;
   @Column({ name: 'rule_version', type: 'int', nullable: true }) ruleVersion: number | null;
   @Column({ name: 'lead_time_days', type: 'int', default: 2 }) leadTimeDays: number;
+  /** False when the rulebook had the lead time not on file (lead time 0: file by the departure at the latest). */
+  @Column({ name: 'lead_time_known', type: 'boolean', default: true }) leadTimeKnown: boolean;
   @Column({ name: 'assignee_id', type: 'uuid', nullable: true }) assigneeId: string | null;
   @ManyToOne(() => User, { nullable: true }) @JoinColumn({ name: 'assignee_id' }) assignee?: User | null;
   @Column({ type: 'text', nullable: true }) notes: string | null;

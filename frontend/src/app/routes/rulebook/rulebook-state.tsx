@@ -1,9 +1,9 @@
 import { useState } from 'react';
-import { Alert, Breadcrumb, Button, Card, Space, Spin, Table, Tag, Typography } from 'antd';
+import { Alert, Breadcrumb, Button, Card, Modal, Space, Spin, Table, Tag, Typography } from 'antd';
 import { Link, useParams } from 'react-router-dom';
-import { RULEBOOK_CAUTION, type RuleVersionDto } from '@amberline/common';
+import { RULEBOOK_CAUTION, coverageRow, type RuleVersionDto } from '@amberline/common';
 import dayjs from 'dayjs';
-import { SampleTag } from '../../../components/rule-source';
+import { RuleDiff } from '../../../features/rulebook/components/rule-diff';
 import { useRule } from '../../../features/rulebook/api/get-rule';
 import { useRuleVersions } from '../../../features/rulebook/api/get-rule-versions';
 import { RuleEditor } from '../../../features/rulebook/components/rule-editor';
@@ -21,11 +21,13 @@ export function RulebookStatePage() {
   const versions = useRuleVersions(code.toUpperCase());
   const [editing, setEditing] = useState(false);
   const [shown, setShown] = useState<RuleVersionDto | null>(null);
+  const [compare, setCompare] = useState<RuleVersionDto | null>(null);
 
   if (rule.isPending) return <Spin style={{ display: 'block', margin: 48 }} />;
   if (rule.isError) return <Alert type="error" showIcon title={rule.error.message} />;
   const current = rule.data;
   const view = shown ?? current;
+  const counts = (current.record as { schema?: number }).schema === 2 ? coverageRow(current.record) : null;
 
   return (
     <div>
@@ -37,7 +39,11 @@ export function RulebookStatePage() {
           </Typography.Title>
           <Tag>v{current.version}</Tag>
           <Typography.Text type="secondary">as of {current.record.asOf}</Typography.Text>
-          {current.record.sample && <SampleTag />}
+          {counts && (
+            <Typography.Text data-testid="fact-counts">
+              {counts.sourced} sourced · {counts.secondary} secondary · {counts.unknown} not on file
+            </Typography.Text>
+          )}
         </Space>
         {canEdit && (
           <Button onClick={() => setEditing(true)} data-testid="edit-rule">
@@ -50,8 +56,8 @@ export function RulebookStatePage() {
         type="warning"
         showIcon
         data-testid="rulebook-banner"
-        title="Sample values unless a source is named"
-        description={`Values marked “sample data” were not read in a published source. Check the issued permit and ${current.record.name}'s current rules before a move. ${RULEBOOK_CAUTION}`}
+        title="Every value names the text it was read in; a topic not on file is an open question"
+        description={`A value not on file reads “not on file — check the permit” on moves, the permit desk and run sheets, never as “none”. ${RULEBOOK_CAUTION}`}
       />
       {shown && shown.version !== current.version && (
         <Alert
@@ -78,9 +84,22 @@ export function RulebookStatePage() {
             { title: 'Note', dataIndex: 'note' },
             { title: 'As of', width: 110, render: (_, v) => v.record.asOf },
             { title: '', width: 80, render: (_, v) => <Button size="small" type="link" onClick={() => setShown(v)}>Show</Button> },
+            {
+              title: '',
+              width: 150,
+              render: (_, v) =>
+                v.version !== current.version && (
+                  <Button size="small" type="link" onClick={() => setCompare(v)} data-testid={`compare-v${v.version}`}>
+                    Compare with current
+                  </Button>
+                ),
+            },
           ]}
         />
       </Card>
+      <Modal open={!!compare} onCancel={() => setCompare(null)} footer={null} width={1100} title={compare ? `${current.code}: v${compare.version} and v${current.version} side by side` : ''}>
+        {compare && <RuleDiff from={compare} to={current} />}
+      </Modal>
       {canEdit && <RuleEditor open={editing} code={current.code} record={current.record} onClose={() => setEditing(false)} />}
     </div>
   );

@@ -1,22 +1,42 @@
 import { useMemo, useState } from 'react';
-import { Input, Space, Table, Tag, Typography } from 'antd';
+import { Input, Space, Table, Tag, Tooltip, Typography } from 'antd';
 import { Link } from 'react-router-dom';
-import type { JurisdictionSummaryDto } from '@amberline/common';
-import dayjs from 'dayjs';
+import type { CoverageCell, CoverageRow } from '@amberline/common';
 import { Caution } from '../../../components/caution';
-import { SampleTag } from '../../../components/rule-source';
-import { useJurisdictions } from '../../../features/rulebook/api/get-jurisdictions';
+import { useRulebookCoverage } from '../../../features/rulebook/api/get-coverage';
 import { to } from '../../../config/paths';
 
-/** The 48 contiguous states and DC with the current version of each rule record. */
+const CELL_STYLE: Record<CoverageCell['status'], { bg: string; fg: string; border: string; label: string }> = {
+  sourced: { bg: '#dcfce7', fg: '#14532d', border: 'solid', label: 'sourced' },
+  secondary: { bg: '#fef9c3', fg: '#713f12', border: 'solid', label: 'secondary' },
+  partial: { bg: '#fffbeb', fg: '#92400e', border: 'dashed', label: 'partly' },
+  unknown: { bg: '#f8fafc', fg: '#64748b', border: 'dashed', label: 'not on file' },
+};
+
+function Cell({ c }: { c: CoverageCell }) {
+  const s = CELL_STYLE[c.status];
+  return (
+    <Tooltip title={`${c.sourced} sourced, ${c.secondary} secondary, ${c.unknown} not on file${c.oldestAsOf ? `; oldest read ${c.oldestAsOf}` : ''}`}>
+      <span
+        data-testid={`cell-${c.topic}`}
+        data-status={c.status}
+        style={{ display: 'inline-block', minWidth: 74, textAlign: 'center', background: s.bg, color: s.fg, border: `1px ${s.border} ${s.fg}`, borderRadius: 4, fontSize: 12, padding: '0 4px' }}
+      >
+        {s.label}
+      </span>
+    </Tooltip>
+  );
+}
+
+/** The rulebook overview: the 48 contiguous states and DC × topics, each cell sourced, secondary, partly or not on file. */
 export function RulebookPage() {
-  const list = useJurisdictions();
+  const cov = useRulebookCoverage();
   const [q, setQ] = useState('');
   const rows = useMemo(() => {
     const s = q.trim().toLowerCase();
-    return (list.data ?? []).filter((j) => !s || j.code.toLowerCase().includes(s) || j.name.toLowerCase().includes(s));
-  }, [list.data, q]);
-  const sampled = (list.data ?? []).filter((j) => j.sample).length;
+    return (cov.data?.rows ?? []).filter((j) => !s || j.code.toLowerCase().includes(s) || j.name.toLowerCase().includes(s));
+  }, [cov.data, q]);
+  const t = cov.data?.totals;
   return (
     <div>
       <Space style={{ width: '100%', justifyContent: 'space-between', marginBottom: 12 }} wrap>
@@ -26,26 +46,31 @@ export function RulebookPage() {
         <Input.Search placeholder="State or code" allowClear onChange={(e) => setQ(e.target.value)} style={{ width: 220 }} />
       </Space>
       <Caution kind="rulebook" />
-      {list.data && (
-        <Typography.Paragraph type="secondary">
-          {list.data.length} jurisdictions; {sampled} hold sample values in at least one part.
+      {t && (
+        <Typography.Paragraph data-testid="coverage-totals">
+          {t.jurisdictions} jurisdictions, {t.facts} values: <strong>{t.sourced}</strong> sourced, <strong>{t.secondary}</strong> secondary,{' '}
+          <strong>{t.unknown}</strong> not on file ({Math.round(((t.sourced + t.secondary) / Math.max(1, t.facts)) * 100)}% on file). Oldest value read {t.oldestAsOf ?? '—'}.
         </Typography.Paragraph>
       )}
-      <Table<JurisdictionSummaryDto>
+      <Table<CoverageRow>
         rowKey="code"
         size="small"
-        loading={list.isPending}
+        loading={cov.isPending}
         dataSource={rows}
         pagination={false}
-        scroll={{ x: 560 }}
+        scroll={{ x: 1300 }}
         data-testid="rulebook-table"
         columns={[
-          { title: 'Code', dataIndex: 'code', width: 70, render: (c: string) => <Link to={to.rulebookState(c)}>{c}</Link> },
-          { title: 'Jurisdiction', dataIndex: 'name', render: (n: string, j) => <Link to={to.rulebookState(j.code)}>{n}</Link> },
-          { title: 'Version', dataIndex: 'version', width: 90, render: (v: number) => <Tag>v{v}</Tag> },
-          { title: 'As of', dataIndex: 'asOf', width: 120 },
-          { title: 'Data', dataIndex: 'sample', width: 130, render: (s: boolean) => (s ? <SampleTag /> : <Tag color="green">sourced</Tag>) },
-          { title: 'Last change', dataIndex: 'updatedAt', width: 150, render: (d: string) => dayjs(d).format('D MMM YYYY') },
+          { title: 'Jurisdiction', dataIndex: 'name', fixed: 'left', width: 170, render: (n: string, j) => <Link to={to.rulebookState(j.code)}>{n} ({j.code})</Link> },
+          { title: 'Version', dataIndex: 'version', width: 70, render: (v: number | null) => (v ? <Tag>v{v}</Tag> : null) },
+          ...(cov.data?.topics ?? []).map((topic, i) => ({
+            title: topic.label,
+            key: topic.key,
+            width: 96,
+            render: (_: unknown, r: CoverageRow) => <Cell c={r.cells[i]} />,
+          })),
+          { title: 'On file', width: 90, render: (_: unknown, r: CoverageRow) => `${r.sourced + r.secondary} / ${r.sourced + r.secondary + r.unknown}` },
+          { title: 'Oldest read', dataIndex: 'oldestAsOf', width: 110, render: (d: string | null) => d ?? '—' },
         ]}
       />
     </div>

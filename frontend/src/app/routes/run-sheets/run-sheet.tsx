@@ -9,6 +9,7 @@ import { AxlesSection } from '../../../features/run-sheets/components/axles-sect
 import { CautionsBox } from '../../../features/run-sheets/components/cautions-box';
 import { ChecksResult } from '../../../features/run-sheets/components/checks-result';
 import { DepartureChecksForm } from '../../../features/run-sheets/components/departure-checks-form';
+import { NotOnFile, OpenQuestions } from '../../../components/rule-source';
 import { EscortsSection } from '../../../features/run-sheets/components/escorts-section';
 import { MarkingsList } from '../../../features/run-sheets/components/markings-list';
 import { PermitsSection } from '../../../features/run-sheets/components/permits-section';
@@ -113,6 +114,7 @@ export function RunSheetPage() {
       <RunSheetHeader sheet={sheet} />
       <DepartureStatus sheet={sheet} />
       <CautionsBox cautions={sheet.cautions} />
+      <OpenQuestions questions={sheet.openQuestions ?? []} />
 
       <nav className="no-print" aria-label="Sections" style={{ display: 'flex', gap: 6, overflowX: 'auto', paddingBottom: 6, marginBottom: 8 }}>
         {JUMPS.map(([id, label]) => (
@@ -132,6 +134,13 @@ export function RunSheetPage() {
         <PermitsSection permits={sheet.permits} />
       </Section>
       <Section id="escorts" title="Escorts">
+        {(sheet.openQuestions ?? [])
+          .filter((q) => q.topic === 'escorts')
+          .map((q) => (
+            <div key={q.jurisdiction} style={{ marginBottom: 6 }}>
+              <NotOnFile>escorts: not on file for {q.jurisdiction} — check the permit</NotOnFile>
+            </div>
+          ))}
         <EscortsSection escorts={sheet.escorts} />
       </Section>
       <Section id="load" title="Load, flags, signs and lamps">

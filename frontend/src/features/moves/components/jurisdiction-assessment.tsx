@@ -3,7 +3,7 @@ import { Collapse, Space, Tag, Typography } from 'antd';
 import { formatFeetInches, formatUsd, type JurisdictionPlanResult, type PlanCheckResult } from '@amberline/common';
 import dayjs from 'dayjs';
 import { Link } from 'react-router-dom';
-import { CitedSource, SampleTag } from '../../../components/rule-source';
+import { CitedSource, NotOnFile, OpenQuestions } from '../../../components/rule-source';
 import { to } from '../../../config/paths';
 import { ReasonLine } from './plan-results';
 
@@ -19,14 +19,28 @@ function JurisdictionBody({ j }: { j: JurisdictionPlanResult }) {
           <ReasonLine key={i} r={r} />
         ))}
       </div>
-      <div style={{ fontSize: 12, color: '#475569' }}>
-        Valid {j.permit.validityDays} days; apply {j.permit.leadTimeDays} days ahead · <CitedSource text={j.permit.source} />
+      <div style={{ fontSize: 12, color: '#475569' }} data-testid="permit-validity">
+        Valid {j.permit.validityDays !== null ? `${j.permit.validityDays} days` : <NotOnFile>validity not on file</NotOnFile>}; apply{' '}
+        {j.permit.leadTimeDays !== null ? `${j.permit.leadTimeDays} days ahead` : <NotOnFile>lead time not on file</NotOnFile>} · <CitedSource text={j.permit.source} />
       </div>
+      <OpenQuestions questions={j.openQuestions} />
 
       <Typography.Title level={5}>Escorts</Typography.Title>
       <div data-testid="escort-requirement">
-        {j.escorts.front + j.escorts.rear === 0 ? (
-          <span>No escort asked for on the road types travelled.</span>
+        {!j.escorts.known ? (
+          <Space wrap>
+            <NotOnFile>
+              escorts: not on file for {j.code}
+              {j.escorts.unknownMeasures.length ? ` (${j.escorts.unknownMeasures.join(', ')})` : ''} — check the permit
+            </NotOnFile>
+            {j.escorts.front + j.escorts.rear > 0 && (
+              <Tag color="purple" data-testid="escort-count">
+                at least {j.escorts.front} front, {j.escorts.rear} rear
+              </Tag>
+            )}
+          </Space>
+        ) : j.escorts.front + j.escorts.rear === 0 ? (
+          <span>Not required by the rules on file for the road types travelled.</span>
         ) : (
           <Space wrap>
             <Tag color="purple" data-testid="escort-count">
@@ -50,6 +64,13 @@ function JurisdictionBody({ j }: { j: JurisdictionPlanResult }) {
       </div>
 
       <Typography.Title level={5}>Signs, flags and lamps</Typography.Title>
+      {m.notOnFile && (m.notOnFile.signs || m.notOnFile.flags || m.notOnFile.lamps) && (
+        <div style={{ marginBottom: 4 }}>
+          <NotOnFile>
+            {[m.notOnFile.signs && 'signs', m.notOnFile.flags && 'flags', m.notOnFile.lamps && 'lamps'].filter(Boolean).join(', ')}: not on file for {j.code} — check the permit
+          </NotOnFile>
+        </div>
+      )}
       {m.signs.length + m.flags.length + m.lamps.length + m.escortSigns.length === 0 ? (
         <span>None asked for.</span>
       ) : (
@@ -83,10 +104,12 @@ function JurisdictionBody({ j }: { j: JurisdictionPlanResult }) {
           <div key={t.date} style={{ marginBottom: 6 }}>
             <Space wrap>
               <Typography.Text strong>{dayjs(t.date).format('ddd D MMM')}</Typography.Text>
+              {!t.known && <NotOnFile>{t.unknownTopics.join(', ')}: not on file — check the permit</NotOnFile>}
               {t.allowed ? (
                 t.intervals.map((iv, i) => (
-                  <Tag key={i} color="green">
+                  <Tag key={i} color={t.known ? 'green' : 'default'}>
                     {iv.startLocal}–{iv.endLocal}
+                    {t.known ? '' : ' (rules on file only)'}
                   </Tag>
                 ))
               ) : (
@@ -104,7 +127,11 @@ function JurisdictionBody({ j }: { j: JurisdictionPlanResult }) {
       </div>
 
       <Typography.Title level={5}>Fee</Typography.Title>
-      {j.fee ? (
+      {j.fee && !j.fee.known ? (
+        <div data-testid="fee">
+          <NotOnFile>fee: unknown — not on file for {j.code}; check the permit</NotOnFile>
+        </div>
+      ) : j.fee ? (
         <div data-testid="fee">
           <Typography.Text strong>{formatUsd(j.fee.totalUsd)}</Typography.Text> estimated{j.fee.refundable === false ? ', not refundable' : ''}
           <ul style={{ paddingLeft: 18, margin: '4px 0' }}>
@@ -139,20 +166,30 @@ function JurisdictionHeader({ j, version }: { j: JurisdictionPlanResult; version
       </Typography.Text>
       <span style={{ color: '#475569' }}>{j.miles} mi</span>
       {j.permitRequired ? <Tag color="blue">permit needed</Tag> : <Tag color="green">no permit</Tag>}
-      {j.escorts.front + j.escorts.rear > 0 && (
-        <Tag color="purple">
-          escorts {j.escorts.front}F/{j.escorts.rear}R
+      {j.permitRequired && !j.escorts.known ? (
+        <Tag color="gold" style={{ borderStyle: 'dashed' }}>
+          escorts not on file
         </Tag>
+      ) : (
+        j.escorts.front + j.escorts.rear > 0 && (
+          <Tag color="purple">
+            escorts {j.escorts.front}F/{j.escorts.rear}R
+          </Tag>
+        )
       )}
       {j.escorts.heightPole && <Tag color="volcano">height pole</Tag>}
       {j.superload.isSuperload && <Tag color="magenta">superload</Tag>}
       {j.overweight && <Tag color="orange">overweight</Tag>}
-      {j.fee && <Tag>{formatUsd(j.fee.totalUsd)}</Tag>}
+      {j.fee && (j.fee.known ? <Tag>{formatUsd(j.fee.totalUsd)}</Tag> : <Tag style={{ borderStyle: 'dashed' }}>fee unknown</Tag>)}
+      {j.openQuestions.length > 0 && (
+        <Tag color="gold" style={{ borderStyle: 'dashed' }}>
+          {j.openQuestions.length} not on file
+        </Tag>
+      )}
       {j.travel.length > 0 && j.travel.every((t) => !t.allowed) && <Tag color="red">no travel window</Tag>}
       <span style={{ fontSize: 12, color: '#64748b' }}>
         {version !== undefined ? `rule v${version}, ` : ''}as of {j.asOf}
       </span>
-      {j.sample && <SampleTag />}
       {!j.ruleFound && <Tag color="red">no rulebook record</Tag>}
     </Space>
   );

@@ -19,7 +19,7 @@ export function ReasonLine({ r }: { r: Reason }) {
   return (
     <div style={{ marginBottom: 4 }}>
       <div>{r.message}</div>
-      <CitedSource text={r.source} sample={r.sample} />
+      <CitedSource text={r.source} />
     </div>
   );
 }

@@ -1,6 +1,6 @@
 import { Alert, Typography } from 'antd';
 import type { RunSheetDto, TravelWindowsResult } from '@amberline/common';
-import { CitedSource } from '../../../components/rule-source';
+import { CitedSource, NotOnFile } from '../../../components/rule-source';
 import { calendarDate, localClock, localInstant, minutesOf } from '../format';
 import { INFO_STYLE } from './section';
 
@@ -60,6 +60,7 @@ export function TravelTimeline({ sheet }: { sheet: RunSheetDto }) {
           title={
             <span data-testid="earliest-departure">
               Earliest legal departure: <strong>{localInstant(sheet.earliestDeparture, firstZone)}</strong>
+              {!sheet.earliestDepartureKnown && <NotOnFile>travel rules of the first state not on file — check the permit</NotOnFile>}
             </span>
           }
         />
@@ -79,6 +80,7 @@ export function TravelTimeline({ sheet }: { sheet: RunSheetDto }) {
               <div style={{ display: 'flex', justifyContent: 'space-between', gap: 8, flexWrap: 'wrap', fontSize: 13 }}>
                 <span style={{ fontWeight: 600 }}>{calendarDate(day.date)}</span>
                 <span>
+                  {!day.known && <NotOnFile>{day.unknownTopics.join(', ')}: not on file — check the permit</NotOnFile>}{' '}
                   {day.allowed && day.intervals.length ? (
                     day.intervals.map((i) => `${i.startLocal}–${i.endLocal}`).join(', ')
                   ) : (
@@ -98,7 +100,7 @@ export function TravelTimeline({ sheet }: { sheet: RunSheetDto }) {
                 <ul style={{ margin: '4px 0 0', paddingInlineStart: 18, fontSize: 13 }} data-testid="travel-restrictions">
                   {day.restrictions.map((r, k) => (
                     <li key={k}>
-                      {r.message} <CitedSource text={r.source} sample={r.sample} />
+                      {r.message} <CitedSource text={r.source} />
                     </li>
                   ))}
                 </ul>
