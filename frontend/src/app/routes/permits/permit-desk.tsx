@@ -16,6 +16,7 @@ import { usePermitOverview } from '../../../features/permits/api/get-permit-over
 import { usePermits, type PermitsFilter } from '../../../features/permits/api/get-permits';
 import { useRunExpiryScan } from '../../../features/permits/api/run-expiry-scan';
 import { PermitDrawer } from '../../../features/permits/components/permit-drawer';
+import { NotOnFile } from '../../../components/rule-source';
 import { PaymentTag, PermitStatusTag, UrgencyTag, usd } from '../../../features/permits/components/permit-tags';
 
 const SORT_OF_COLUMN: Record<string, [PermitSort, PermitSort]> = {
@@ -167,7 +168,7 @@ export function PermitDeskPage() {
           { key: 'number', title: 'Number', render: (_: unknown, p) => p.permitNumber ?? '—' },
           { key: 'departure', title: 'Departs', sorter: true, sortOrder: order(filter, 'departure'), render: (_: unknown, p) => p.departure },
           { key: 'validity', title: 'Valid (state time)', render: (_: unknown, p) => <span>{validityText(p)}{p.expiryWarning && <div><Typography.Text type="danger">{p.expiryWarning}</Typography.Text></div>}</span> },
-          { key: 'fee', title: 'Fee', render: (_: unknown, p) => (p.actualFeeUsd !== null ? usd(p.actualFeeUsd) : `${usd(p.estimatedFeeUsd)} est.`) },
+          { key: 'fee', title: 'Fee', render: (_: unknown, p) => (p.actualFeeUsd !== null ? usd(p.actualFeeUsd) : p.estimatedFeeUsd !== null ? `${usd(p.estimatedFeeUsd)} est.` : <NotOnFile>fee unknown</NotOnFile>) },
           { key: 'pdf', title: 'PDF', render: (_: unknown, p) => (p.documentCount ? `${p.documentCount} version${p.documentCount > 1 ? 's' : ''}` : '—') },
           { key: 'paid', title: 'Payment', render: (_: unknown, p) => <PaymentTag status={p.paymentStatus} /> },
           { key: 'assignee', title: 'Assignee', render: (_: unknown, p) => p.assignee?.name ?? <Typography.Text type="secondary">unassigned</Typography.Text> },

@@ -53,7 +53,7 @@ export function MovePermits({ moveId }: { moveId: string }) {
           { title: 'Status', dataIndex: 'status', render: (s: PermitDto['status']) => <PermitStatusTag status={s} /> },
           { title: 'Number', dataIndex: 'permitNumber', render: (v: string | null) => v ?? '—' },
           { title: 'Valid', render: (_: unknown, p) => (p.validFromLocal ? `${localText(p.validFromLocal)} – ${localText(p.validToLocal)}` : '—') },
-          { title: 'Fee', render: (_: unknown, p) => `${usd(p.actualFeeUsd ?? p.estimatedFeeUsd)}${p.actualFeeUsd === null && p.estimatedFeeUsd !== null ? ' est.' : ''}` },
+          { title: 'Fee', render: (_: unknown, p) => (p.actualFeeUsd === null && p.estimatedFeeUsd === null ? 'unknown (not on file)' : `${usd(p.actualFeeUsd ?? p.estimatedFeeUsd)}${p.actualFeeUsd === null ? ' est.' : ''}`) },
           { title: 'Payment', dataIndex: 'paymentStatus', render: (s: PermitDto['paymentStatus']) => <PaymentTag status={s} /> },
           {
             title: 'PDF',

@@ -20,6 +20,7 @@ import { useRefundPermit } from '../api/refund-permit';
 import { useUpdatePermit } from '../api/update-permit';
 import { useUploadPermitDocument } from '../api/upload-permit-document';
 import { localText, PaymentTag, PermitStatusTag, usd } from './permit-tags';
+import { NotOnFile } from '../../../components/rule-source';
 
 type FormValues = {
   permitType: PermitType;
@@ -159,9 +160,18 @@ function PermitDetails({ p, canWork }: { p: PermitDto; canWork: boolean }) {
       <Descriptions size="small" column={2} style={{ marginBottom: 12 }}>
         <Descriptions.Item label="Move"><Link to={to.move(p.moveId)}>{p.moveReference}</Link> · {p.customer}</Descriptions.Item>
         <Descriptions.Item label="Departs">{p.departure}</Descriptions.Item>
-        <Descriptions.Item label="File by">{p.fileBy} ({p.leadTimeDays} d lead time)</Descriptions.Item>
+        <Descriptions.Item label="File by">
+          {p.fileBy} {p.leadTimeDays !== null ? `(${p.leadTimeDays} d lead time)` : <NotOnFile>lead time not on file — no later than the departure</NotOnFile>}
+        </Descriptions.Item>
         <Descriptions.Item label="Times in">{p.timeZone}</Descriptions.Item>
-        <Descriptions.Item label="Estimated fee">{usd(p.estimatedFeeUsd)} (rulebook{p.ruleVersion ? ` v${p.ruleVersion}` : ''})</Descriptions.Item>
+        <Descriptions.Item label="Estimated fee">
+          {p.estimatedFeeUsd !== null ? usd(p.estimatedFeeUsd) : <NotOnFile>unknown — fee not on file</NotOnFile>} (rulebook{p.ruleVersion ? ` v${p.ruleVersion}` : ''})
+        </Descriptions.Item>
+        {p.conditions.escortsKnown === false && (
+          <Descriptions.Item label="Escorts (rulebook)">
+            <NotOnFile>escorts not on file for {p.jurisdiction} — take them from the permit</NotOnFile>
+          </Descriptions.Item>
+        )}
         <Descriptions.Item label="Refundable">{p.refundable === null ? 'rule does not say' : p.refundable ? 'yes' : 'no'}</Descriptions.Item>
         {p.filedAt && <Descriptions.Item label="Filed">{new Date(p.filedAt).toLocaleString()}</Descriptions.Item>}
         {p.issuedAt && <Descriptions.Item label="Issued">{new Date(p.issuedAt).toLocaleString()}</Descriptions.Item>}
