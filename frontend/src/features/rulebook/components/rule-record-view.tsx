@@ -24,6 +24,7 @@ export function RuleRecordView({ record }: { record: JurisdictionRule }) {
             size="small"
             pagination={false}
             showHeader={false}
+            scroll={{ x: 760 }}
             rowKey="key"
             dataSource={t.paths.map((p) => ({ key: p, label: FACT_LABELS[p] ?? p, fact: facts.get(p)! }))}
             columns={[
