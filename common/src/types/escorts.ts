@@ -162,6 +162,8 @@ export type MoveEscortsDto = {
   planRevision: number;
   travelDates: string[];
   needsEscorts: boolean;
+  /** Jurisdictions whose escort answer is not on file for this load: the permit must say what it asks. */
+  escortsNotOnFile: string[];
   slots: EscortSlotDto[];
   bookings: EscortBookingDto[];
   /** Jurisdictions on the route that ask for an escort certificate (sample data). */

@@ -37,7 +37,17 @@ export function MoveEscorts({ moveId }: { moveId: string }) {
   return (
     <div data-testid="move-escorts">
       <Alert type="warning" showIcon title={d.caution} style={{ marginBottom: 12 }} />
-      {!d.needsEscorts ? (
+      {(d.escortsNotOnFile ?? []).length > 0 && (
+        <Alert
+          type="warning"
+          showIcon
+          style={{ marginBottom: 12, borderStyle: 'dashed' }}
+          data-testid="escorts-not-on-file"
+          title={`Escorts not on file for ${d.escortsNotOnFile.join(', ')} — check the permit`}
+          description="The rulebook has no escort rule on file for this load there; book what the issued permit asks."
+        />
+      )}
+      {!d.needsEscorts && (d.escortsNotOnFile ?? []).length > 0 ? null : !d.needsEscorts ? (
         <Alert
           type="info"
           showIcon

@@ -10,7 +10,7 @@ import {
   type Reason,
 } from '@amberline/common';
 import dayjs from 'dayjs';
-import { CitedSource } from '../../../components/rule-source';
+import { CitedSource, NotOnFile } from '../../../components/rule-source';
 
 const ft = (inches: number) => formatFeetInches(Math.max(0, inches));
 const lb = (pounds: number) => formatPounds(Math.max(0, pounds));
@@ -161,10 +161,45 @@ export function AssessmentTotals({ result, column }: { result: PlanCheckResult; 
         column={column ?? { xs: 1, sm: 2, lg: 3 }}
         items={[
           { key: 'p', label: 'Permits needed', children: s.permitsNeeded.length ? s.permitsNeeded.join(', ') : 'none' },
-          { key: 'e', label: 'Escorts (most at once)', children: `${s.maxEscortsFront} front, ${s.maxEscortsRear} rear` },
-          { key: 'f', label: 'Estimated fees', children: formatUsd(s.estimatedFeesUsd) },
+          {
+            key: 'e',
+            label: 'Escorts (most at once)',
+            children: (s.escortsNotOnFile ?? []).length ? (
+              <span>
+                {s.maxEscortsFront + s.maxEscortsRear > 0 ? `at least ${s.maxEscortsFront} front, ${s.maxEscortsRear} rear; ` : ''}
+                <NotOnFile>not on file for {s.escortsNotOnFile.join(', ')} — check the permit</NotOnFile>
+              </span>
+            ) : (
+              `${s.maxEscortsFront} front, ${s.maxEscortsRear} rear`
+            ),
+          },
+          {
+            key: 'f',
+            label: 'Estimated fees',
+            children: (s.feesNotOnFile ?? []).length ? (
+              <span>
+                {formatUsd(s.estimatedFeesUsd)} on file + <NotOnFile>unknown for {s.feesNotOnFile.join(', ')}</NotOnFile>
+              </span>
+            ) : (
+              formatUsd(s.estimatedFeesUsd)
+            ),
+          },
           { key: 's', label: 'Superload in', children: s.superloads.length ? s.superloads.join(', ') : 'none' },
-          { key: 'd', label: 'Earliest legal start', children: s.earliestDeparture ? dayjs(s.earliestDeparture).format('ddd D MMM YYYY, HH:mm') : 'no window on the planned dates' },
+          {
+            key: 'd',
+            label: 'Earliest legal start',
+            children: (
+              <span>
+                {s.earliestDeparture ? `${dayjs(s.earliestDeparture).format('ddd D MMM YYYY, HH:mm')} (your time zone)` : 'no window on the planned dates'}
+                {s.earliestDepartureKnown === false && (
+                  <>
+                    {' '}
+                    <NotOnFile>travel rules of the first state not on file</NotOnFile>
+                  </>
+                )}
+              </span>
+            ),
+          },
         ]}
       />
       {s.problems.length > 0 && (
