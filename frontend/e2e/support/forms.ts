@@ -14,12 +14,21 @@ export async function fill(page: Page, testId: string, value: string): Promise<v
   await input.fill(value);
 }
 
-/** Picks an option of an antd Select by typing part of its label. */
+/**
+ * Picks an option of an antd Select by typing part of its label. A click that lands while the option list re-renders
+ * (its query refetching) can be lost, so the pick is checked on the Select itself and tried again (three times at most).
+ */
 export async function pick(page: Page, testId: string, text: string): Promise<void> {
-  const input = await inputOf(page, testId);
-  await input.click();
-  if ((await input.getAttribute('readonly')) === null) await input.fill(text);
-  await page.locator('.ant-select-dropdown:not(.ant-select-dropdown-hidden) .ant-select-item-option').filter({ hasText: text }).first().click();
+  const select = page.getByTestId(testId).first();
+  for (let attempt = 1; ; attempt++) {
+    const input = await inputOf(page, testId);
+    await input.click();
+    if ((await input.getAttribute('readonly')) === null) await input.fill(text);
+    await page.locator('.ant-select-dropdown:not(.ant-select-dropdown-hidden) .ant-select-item-option').filter({ hasText: text }).first().click();
+    const chosen = select.locator('.ant-select-content-value, .ant-select-selection-item').filter({ hasText: text });
+    if ((await chosen.count()) > 0 || attempt >= 3) return;
+    await page.keyboard.press('Escape');
+  }
 }
 
 /** Signs in through the API (for setting up data the test needs). */
