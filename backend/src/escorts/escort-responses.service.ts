@@ -94,7 +94,7 @@ export class EscortResponsesService {
   private async checkAnswer(m: EntityManager, dto: EscortAnswerDto, f: Found, now: Date): Promise<EscortAnswer> {
     if (dto.decision === 'confirm') {
       if (!dto.operatorName) throw fieldError('operatorName', 'name the operator who will drive the escort vehicle');
-      if (!dto.vehicle) throw fieldError('vehicle', 'name the escort vehicle (e.g. make, colour, plate)');
+      if (!dto.vehicle) throw fieldError('vehicle', 'name the escort vehicle (e.g. make, color, plate)');
       if (!dto.phone) throw fieldError('phone', 'give a phone number that reaches the operator on the road');
       const certs = (dto.certifications ?? []).filter((c) => c.number);
       return { decision: 'confirm', operatorName: dto.operatorName, vehicle: dto.vehicle, phone: dto.phone, certifications: certs, ...(dto.note ? { note: dto.note } : {}) };

@@ -2,16 +2,16 @@ import * as zipcodes from 'zipcodes';
 import { jurisdictionByCode, type RouteSegmentDto, type RouteSegmentInput } from '@amberline/common';
 import { fieldError } from '../core/app-exception';
 
-const centres = new Map<string, { lat: number; lon: number }>();
+const centers = new Map<string, { lat: number; lon: number }>();
 
 /** The mean position of a state's ZIP codes: a stand-in point when the dispatcher gives none. */
-function stateCentre(code: string): { lat: number; lon: number } | null {
-  const hit = centres.get(code);
+function stateCenter(code: string): { lat: number; lon: number } | null {
+  const hit = centers.get(code);
   if (hit) return hit;
   const all = (zipcodes.lookupByState(code) ?? []) as zipcodes.ZipCode[];
   if (!all.length) return null;
   const c = { lat: all.reduce((s, z) => s + z.latitude, 0) / all.length, lon: all.reduce((s, z) => s + z.longitude, 0) / all.length };
-  centres.set(code, c);
+  centers.set(code, c);
   return c;
 }
 
@@ -42,10 +42,10 @@ export function resolveRoute(route: RouteSegmentInput[]): RouteSegmentDto[] {
       }
       if ((lat === undefined) !== (lon === undefined)) throw fieldError(`route[${i}].lat`, 'give both lat and lon, or a ZIP code');
       if (lat === undefined || lon === undefined) {
-        const c = stateCentre(s.jurisdiction)!;
+        const c = stateCenter(s.jurisdiction)!;
         lat = Math.round(c.lat * 1000) / 1000;
         lon = Math.round(c.lon * 1000) / 1000;
-        place = `${j.name} (centre of the state)`;
+        place = `${j.name} (center of the state)`;
       }
       const out: RouteSegmentDto = { ...s, lat, lon, timeZone: j.timeZone, place };
       if (out.zip === undefined) delete out.zip;

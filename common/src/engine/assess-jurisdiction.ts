@@ -165,7 +165,7 @@ function escortMeasureNeeded(rule: JurisdictionRule, measure: EscortMeasure, d: 
     case 'length':
       return oversize.has('length') || !isKnown(rule.legal.overallLengthIn);
     case 'sideProjection': {
-      // off-centre rules: only a load that projects unevenly
+      // off-center rules: only a load that projects unevenly
       const l = d.sideProjectionLeftIn;
       const r = d.sideProjectionRightIn;
       return l !== undefined && r !== undefined && Math.abs(l - r) > 1;

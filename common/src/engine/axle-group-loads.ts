@@ -7,21 +7,21 @@ import { ABSURD, checkNumber } from './validate';
 export type TractorAxleGeometry = {
   steerTareLb: number;
   driveTareLb: number;
-  /** Steer axle to the drive-group centre. */
+  /** Steer axle to the drive-group center. */
   wheelbaseFt: number;
-  /** Kingpin (fifth wheel) ahead of the drive-group centre; negative when behind it. */
+  /** Kingpin (fifth wheel) ahead of the drive-group center; negative when behind it. */
   fifthWheelAheadOfDriveFt: number;
 };
 
 export type TrailerAxleGeometry = {
   tareLb: number;
-  /** Trailer tare centre of gravity behind the kingpin. */
+  /** Trailer tare center of gravity behind the kingpin. */
   tareCgFromKingpinFt: number;
-  /** Trailer axle-group centre behind the kingpin (the slider setting on a sliding axle). */
+  /** Trailer axle-group center behind the kingpin (the slider setting on a sliding axle). */
   axleGroupFromKingpinFt: number;
 };
 
-/** One article on the deck: its weight and centre of gravity behind the kingpin (negative = ahead of it). */
+/** One article on the deck: its weight and center of gravity behind the kingpin (negative = ahead of it). */
 export type LoadOnDeck = { weightLb: number; cgFromKingpinFt: number };
 
 export type AxleGroupLoadsInput = {
@@ -111,7 +111,7 @@ export function axleGroupLoads(input: AxleGroupLoadsInput): AxleGroupLoadsResult
   return { steerLb, driveLb, trailerLb, kingpinLb, grossLb, warnings, reasons, caution: PLANNING_CAUTION };
 }
 
-/** Where each axle sits within its group: offsets of each axle from the group centre, front to rear. */
+/** Where each axle sits within its group: offsets of each axle from the group center, front to rear. */
 export type AxleLayout = {
   driveAxleOffsetsFt: number[];
   trailerAxleOffsetsFt: number[];
@@ -130,12 +130,12 @@ export function combinationAxles(
   if (layout.driveAxleOffsetsFt.length === 0) throw new RangeError('layout.driveAxleOffsetsFt must list at least one axle');
   if (layout.trailerAxleOffsetsFt.length === 0) throw new RangeError('layout.trailerAxleOffsetsFt must list at least one axle');
   const kingpinFt = tractor.wheelbaseFt - tractor.fifthWheelAheadOfDriveFt;
-  const trailerCentre = kingpinFt + trailer.axleGroupFromKingpinFt;
+  const trailerCenter = kingpinFt + trailer.axleGroupFromKingpinFt;
   const axles: AxleInput[] = [{ positionFt: 0, weightLb: Math.max(0, loads.steerLb) }];
   const nd = layout.driveAxleOffsetsFt.length;
   for (const o of layout.driveAxleOffsetsFt) axles.push({ positionFt: tractor.wheelbaseFt + o, weightLb: Math.max(0, loads.driveLb) / nd });
   const nt = layout.trailerAxleOffsetsFt.length;
-  for (const o of layout.trailerAxleOffsetsFt) axles.push({ positionFt: trailerCentre + o, weightLb: Math.max(0, loads.trailerLb) / nt });
+  for (const o of layout.trailerAxleOffsetsFt) axles.push({ positionFt: trailerCenter + o, weightLb: Math.max(0, loads.trailerLb) / nt });
   return axles;
 }
 

@@ -108,7 +108,7 @@ export function checkAxleWeights(axles: AxleInput[], limits: Partial<AxleLimits>
     groups.push({ fromAxle, toAxle, axleCount, distanceFt, weightLb, limitLb, rule, ok, overByLb: over, message, source });
   };
 
-  // Single-axle units: consecutive axles whose extreme centres are within 40 in.
+  // Single-axle units: consecutive axles whose extreme centers are within 40 in.
   const units: Unit[] = [];
   for (let i = 0; i < pos.length; i++) {
     const u = units[units.length - 1];

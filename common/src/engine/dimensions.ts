@@ -38,7 +38,7 @@ export type PlacedArticle = {
   heightIn: number;
   /** Front of the article behind the trailer front; negative when it projects ahead of the trailer. */
   positionFromTrailerFrontIn: number;
-  /** Article centreline offset from the trailer centreline, positive to the right (curb side). */
+  /** Article centerline offset from the trailer centerline, positive to the right (curb side). */
   lateralOffsetIn?: number;
   dunnageIn?: number;
   /** Deck height under the article; by default the highest deck section under its footprint. */

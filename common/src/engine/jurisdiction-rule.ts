@@ -127,7 +127,7 @@ export type EscortRules = {
   length: Fact<EscortRule[]>;
   frontOverhang: Fact<EscortRule[]>;
   rearOverhang: Fact<EscortRule[]>;
-  /** Off-centre / side projection. */
+  /** Off-center / side projection. */
   sideProjection: Fact<EscortRule[]>;
   /** A load over escort limits in two measures needs front and rear escorts unless the pair is excepted; null = no such rule. */
   twoDimensionRule: Fact<{ exceptPairs: [Measure, Measure][] } | null>;

@@ -17,16 +17,16 @@ export type PlanTractor = TractorAxleGeometry & {
   bumperToSteerIn: number;
   widthIn: number;
   heightIn: number;
-  /** Drive axles relative to the drive-group centre, front to rear (e.g. [-2.1, 2.1] for a tandem). */
+  /** Drive axles relative to the drive-group center, front to rear (e.g. [-2.1, 2.1] for a tandem). */
   driveAxleOffsetsFt: number[];
 };
 
 export type PlanTrailer = {
   tareLb: number;
   tareCgFromKingpinFt: number;
-  /** Trailer axle-group centre behind the kingpin. */
+  /** Trailer axle-group center behind the kingpin. */
   axleGroupFromKingpinFt: number;
-  /** Trailer axles relative to the group centre, front to rear. */
+  /** Trailer axles relative to the group center, front to rear. */
   axleOffsetsFt: number[];
   kingpinFromFrontIn: number;
   lengthIn: number;
@@ -41,7 +41,7 @@ export type PlanArticle = PlacedArticle & {
   id: string;
   description?: string;
   weightLb: number;
-  /** Centre of gravity behind the article's front (default: half its length). */
+  /** Center of gravity behind the article's front (default: half its length). */
   cgFromFrontIn?: number;
   blockedForward: boolean;
   heavyEquipment?: boolean;

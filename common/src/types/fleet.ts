@@ -31,14 +31,14 @@ export type TractorInput = {
   steerTareLb: number;
   driveTareLb: number;
   wheelbaseFt: number;
-  /** Kingpin ahead of the drive-group centre (negative = behind). */
+  /** Kingpin ahead of the drive-group center (negative = behind). */
   fifthWheelAheadOfDriveFt: number;
   /** Sliding fifth wheel range, if any. */
   fifthWheelRangeFt?: { min: number; max: number } | null;
   bumperToSteerIn: number;
   widthIn: number;
   heightIn: number;
-  /** Drive axles relative to the drive-group centre, front to rear (tandem about [-2.1, 2.1]). */
+  /** Drive axles relative to the drive-group center, front to rear (tandem about [-2.1, 2.1]). */
   driveAxleOffsetsFt: number[];
 };
 export type TractorDto = TractorInput & { id: string; active: boolean; version: number; updatedAt: string };
@@ -53,9 +53,9 @@ export type TrailerInput = {
   tareLb: number;
   tareCgFromKingpinFt: number;
   kingpinFromFrontIn: number;
-  /** Trailer axles relative to the group centre, front to rear. */
+  /** Trailer axles relative to the group center, front to rear. */
   axleOffsetsFt: number[];
-  /** Group centre behind the kingpin when the axles do not slide, or the usual setting. */
+  /** Group center behind the kingpin when the axles do not slide, or the usual setting. */
   axleGroupFromKingpinFt: number;
   slider?: SliderRange | null;
   anchorPoints: AnchorPoint[];

@@ -55,7 +55,7 @@ export type MoveInput = {
   articles: MoveArticle[];
   tractorId: string;
   trailerId: string;
-  /** Trailer axle-group centre behind the kingpin (the sliding axle setting). */
+  /** Trailer axle-group center behind the kingpin (the sliding axle setting). */
   sliderSettingFt?: number | null;
   route: RouteSegmentInput[];
   origin: string;

@@ -21,7 +21,7 @@ export type DiagramPlan = {
   tractor: DiagramTractor;
   trailer: DiagramTrailer;
   articles: DiagramArticle[];
-  /** Trailer axle-group centre behind the kingpin (sliding axle); the trailer's own setting when absent. */
+  /** Trailer axle-group center behind the kingpin (sliding axle); the trailer's own setting when absent. */
   sliderSettingFt?: number | null;
 };
 

@@ -6,7 +6,7 @@ import { ApiError } from '../../lib/api-client';
 import { useAuth } from '../../lib/auth';
 import { palette } from '../theme';
 
-// The first page anyone loads: plain elements in our theme's colours, so it ships without the heavier antd pieces.
+// The first page anyone loads: plain elements in our theme's colors, so it ships without the heavier antd pieces.
 const field: CSSProperties = { display: 'block', width: '100%', boxSizing: 'border-box', padding: '8px 11px', fontSize: 15, border: `1px solid ${palette.slate200}`, borderRadius: 4, font: 'inherit' };
 const label: CSSProperties = { display: 'block', fontSize: 14, margin: '16px 0 6px', color: palette.slate800 };
 

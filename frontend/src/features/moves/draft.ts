@@ -32,7 +32,7 @@ export type ArticleDraft = {
   height?: string;
   weightLb?: number | null;
   weightSource?: WeightSource;
-  /** Centre of gravity behind the piece's front, feet-inches; empty = middle of the piece. */
+  /** Center of gravity behind the piece's front, feet-inches; empty = middle of the piece. */
   cg?: string;
   /** Front of the piece behind the trailer front, feet-inches; a leading minus puts it ahead of the trailer. */
   position?: string;

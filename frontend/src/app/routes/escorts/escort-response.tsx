@@ -224,7 +224,7 @@ function AnswerForm({ r, token, onDone, onGone }: { r: EscortRequestView; token:
               <AutoComplete options={r.vendor.operators.map((o) => ({ value: o.name }))} onSelect={pickOperator} placeholder="Operator's name" />
             </Form.Item>
             <Form.Item name="vehicle" label="Vehicle" rules={[{ required: true, message: 'Name the escort vehicle' }]}>
-              <AutoComplete options={r.vendor.vehicles.map((v) => ({ value: v.plate ? `${v.label}, ${v.plate}` : v.label }))} placeholder="Make, colour, plate" />
+              <AutoComplete options={r.vendor.vehicles.map((v) => ({ value: v.plate ? `${v.label}, ${v.plate}` : v.label }))} placeholder="Make, color, plate" />
             </Form.Item>
             <Form.Item name="phone" label="Phone on the road" rules={[{ required: true, message: 'Give a phone number' }, { pattern: /^[0-9+()\-. ]{7,40}$/, message: '7–40 digits, spaces, + ( ) - .' }]}>
               <Input inputMode="tel" />

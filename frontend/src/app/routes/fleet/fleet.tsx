@@ -66,7 +66,7 @@ export function FleetPage() {
                 <div>Decks: {t.decks.map((d) => `${d.name} ${formatFeetInches(d.fromFrontIn)}–${formatFeetInches(d.toFrontIn)} at ${formatFeetInches(d.heightIn)}`).join('; ')}</div>
                 <div>Anchor points: {t.anchorPoints.map((a) => `${ANCHOR_KIND_LABELS[a.kind]} ×${a.countPerSide} per side, ${formatPounds(a.wllLb)}`).join('; ') || 'none on file'}</div>
                 <div>Gauge calibration: {t.gaugeCalibration.map((g) => `${g.psi} psi = ${formatPounds(g.loadLb)}`).join('; ') || 'none'}</div>
-                <div>Tires: {t.tireSize ?? '—'}; tare centre {t.tareCgFromKingpinFt} ft behind the kingpin; kingpin {t.kingpinFromFrontIn} in behind the front</div>
+                <div>Tires: {t.tireSize ?? '—'}; tare center {t.tareCgFromKingpinFt} ft behind the kingpin; kingpin {t.kingpinFromFrontIn} in behind the front</div>
               </div>
             ),
           }}

@@ -114,11 +114,11 @@ export function MovePage() {
             { title: 'Piece', render: (_, a) => <><strong>{a.id}</strong> {a.description}</> },
             { title: 'L × W × H', render: (_, a) => `${formatFeetInches(a.lengthIn)} × ${formatFeetInches(a.widthIn)} × ${formatFeetInches(a.heightIn)}` },
             { title: 'Weight', render: (_, a) => <>{formatPounds(a.weightLb)} <Typography.Text type="secondary">({WEIGHT_SOURCE[a.weightSource]})</Typography.Text></> },
-            { title: 'Centre of gravity', render: (_, a) => (a.cgFromFrontIn !== undefined ? `${formatFeetInches(a.cgFromFrontIn)} behind its front` : 'middle') },
+            { title: 'Center of gravity', render: (_, a) => (a.cgFromFrontIn !== undefined ? `${formatFeetInches(a.cgFromFrontIn)} behind its front` : 'middle') },
             {
               title: 'Placement',
               render: (_, a) =>
-                `${formatSignedFeetInches(a.positionFromTrailerFrontIn)} from the trailer front, ${a.lateralOffsetIn ? `${a.lateralOffsetIn} in ${a.lateralOffsetIn > 0 ? 'to the curb side' : 'to the road side'}` : 'centred'}, dunnage ${a.dunnageIn ?? 0} in`,
+                `${formatSignedFeetInches(a.positionFromTrailerFrontIn)} from the trailer front, ${a.lateralOffsetIn ? `${a.lateralOffsetIn} in ${a.lateralOffsetIn > 0 ? 'to the curb side' : 'to the road side'}` : 'centered'}, dunnage ${a.dunnageIn ?? 0} in`,
             },
             {
               title: '',

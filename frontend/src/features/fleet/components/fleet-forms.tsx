@@ -92,8 +92,8 @@ export function TractorDrawer({ open, tractor, onClose }: { open: boolean; tract
           <Col xs={12}><Form.Item name="plate" label="Plate" rules={[{ required: true, whitespace: true }, { max: 20 }]}><Input /></Form.Item></Col>
           <Col xs={12}><Form.Item name="steerTareLb" label="Steer axle, empty" rules={[{ required: true }]}>{num('lb', { min: 1000, max: 40000 })}</Form.Item></Col>
           <Col xs={12}><Form.Item name="driveTareLb" label="Drive group, empty" rules={[{ required: true }]}>{num('lb', { min: 1000, max: 60000 })}</Form.Item></Col>
-          <Col xs={12}><Form.Item name="wheelbaseFt" label="Wheelbase (steer to drive centre)" rules={[{ required: true }]}>{num('ft', { min: 8, max: 35, step: 0.5 })}</Form.Item></Col>
-          <Col xs={12}><Form.Item name="fifthWheelAheadOfDriveFt" label="Fifth wheel ahead of drive centre" rules={[{ required: true }]} extra="negative = behind">{num('ft', { min: -5, max: 5, step: 0.25 })}</Form.Item></Col>
+          <Col xs={12}><Form.Item name="wheelbaseFt" label="Wheelbase (steer to drive center)" rules={[{ required: true }]}>{num('ft', { min: 8, max: 35, step: 0.5 })}</Form.Item></Col>
+          <Col xs={12}><Form.Item name="fifthWheelAheadOfDriveFt" label="Fifth wheel ahead of drive center" rules={[{ required: true }]} extra="negative = behind">{num('ft', { min: -5, max: 5, step: 0.25 })}</Form.Item></Col>
           <Col xs={8}><Form.Item name="bumperToSteerIn" label="Bumper to steer" rules={[{ required: true }]}>{num('in', { min: 0, max: 240 })}</Form.Item></Col>
           <Col xs={8}><Form.Item name="widthIn" label="Width" rules={[{ required: true }]}>{num('in', { min: 60, max: 120 })}</Form.Item></Col>
           <Col xs={8}><Form.Item name="heightIn" label="Height" rules={[{ required: true }]}>{num('in', { min: 60, max: 170 })}</Form.Item></Col>
@@ -105,7 +105,7 @@ export function TractorDrawer({ open, tractor, onClose }: { open: boolean; tract
             <Col xs={12}><Form.Item name={['fifthWheelRangeFt', 'max']} label="To" rules={[{ required: true }]}>{num('ft', { min: -10, max: 10, step: 0.25 })}</Form.Item></Col>
           </Row>
         )}
-        <Typography.Text strong>Drive axles, from the group centre (front to rear)</Typography.Text>
+        <Typography.Text strong>Drive axles, from the group center (front to rear)</Typography.Text>
         <Form.List name="driveAxleOffsetsFt" rules={[{ validator: async (_, v) => { if (!v || v.length < 1) throw new Error('at least one drive axle'); } }]}>
           {(fields, { add, remove }, { errors }) => (
             <>
@@ -184,7 +184,7 @@ export function TrailerDrawer({ open, trailer, onClose }: { open: boolean; trail
           <Col xs={8}><Form.Item name="widthIn" label="Width" rules={[{ required: true }]}>{num('in', { min: 60, max: 200 })}</Form.Item></Col>
           <Col xs={8}><Form.Item name="heightIn" label="Highest fixed part" extra="headboard, gooseneck">{num('in', { min: 0, max: 200 })}</Form.Item></Col>
           <Col xs={8}><Form.Item name="tareLb" label="Tare" rules={[{ required: true }]}>{num('lb', { min: 2000, max: 120000 })}</Form.Item></Col>
-          <Col xs={8}><Form.Item name="tareCgFromKingpinFt" label="Tare centre behind kingpin" rules={[{ required: true }]}>{num('ft', { min: 0, max: 200, step: 0.5 })}</Form.Item></Col>
+          <Col xs={8}><Form.Item name="tareCgFromKingpinFt" label="Tare center behind kingpin" rules={[{ required: true }]}>{num('ft', { min: 0, max: 200, step: 0.5 })}</Form.Item></Col>
           <Col xs={8}><Form.Item name="kingpinFromFrontIn" label="Kingpin behind the front" rules={[{ required: true }]}>{num('in', { min: 0, max: 600 })}</Form.Item></Col>
           <Col xs={12}><Form.Item name="axleGroupFromKingpinFt" label="Axle group behind kingpin" rules={[{ required: true }]} extra="the usual setting on a sliding axle">{num('ft', { min: 5, max: 200, step: 0.5 })}</Form.Item></Col>
           <Col xs={12}><Form.Item name="tireSize" label="Tire size"><Input placeholder="255/70R22.5" /></Form.Item></Col>
@@ -208,7 +208,7 @@ export function TrailerDrawer({ open, trailer, onClose }: { open: boolean; trail
           )}
         </Form.List>
 
-        <Typography.Title level={5}>Axles, from the group centre (front to rear)</Typography.Title>
+        <Typography.Title level={5}>Axles, from the group center (front to rear)</Typography.Title>
         <Form.List name="axleOffsetsFt">
           {(fields, { add, remove }) => (
             <Space wrap>

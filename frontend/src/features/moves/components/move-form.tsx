@@ -311,7 +311,7 @@ export function MoveForm({ move }: { move?: MoveDto }) {
                           </Form.Item>
                         </Col>
                         <Col xs={24} sm={8}>
-                          <Form.Item name={[f.name, 'cg']} label="Centre of gravity" rules={[feetInchesRule('centre of gravity', { required: false, positive: false })]} extra="behind the piece's front; empty = middle">
+                          <Form.Item name={[f.name, 'cg']} label="Center of gravity" rules={[feetInchesRule('center of gravity', { required: false, positive: false })]} extra="behind the piece's front; empty = middle">
                             <Input placeholder={`ft' in"`} />
                           </Form.Item>
                         </Col>

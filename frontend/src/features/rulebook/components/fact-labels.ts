@@ -24,7 +24,7 @@ export const FACT_LABELS: Record<string, string> = {
   'escorts.length': 'Escorts by length',
   'escorts.frontOverhang': 'Escorts by front overhang',
   'escorts.rearOverhang': 'Escorts by rear overhang',
-  'escorts.sideProjection': 'Escorts for off-centre loads',
+  'escorts.sideProjection': 'Escorts for off-center loads',
   'escorts.twoDimensionRule': 'Over escort limits in two measures',
   'escorts.heightPoleMarginIn': 'Height pole above the load',
   'escorts.certification': 'Escort certification',

@@ -236,7 +236,7 @@ function SideView({ sheet, g, marks }: { sheet: RunSheetDto; g: Geometry; marks:
   const drawn: ReactNode[] = [];
   const seen = new Set<string>();
   marks.forEach((m, i) => {
-    // the side view shows the driver's (left) side; a centre or right-side mark at the same place is drawn once
+    // the side view shows the driver's (left) side; a center or right-side mark at the same place is drawn once
     const key = `${m.kind}:${m.spot.along}:${m.spot.piece.id}`;
     if (m.spot.side === 'right' && marks.some((o) => o !== m && o.kind === m.kind && o.spot.along === m.spot.along && o.spot.side === 'left')) return;
     if (seen.has(key)) return;

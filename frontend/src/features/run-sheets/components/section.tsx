@@ -19,7 +19,7 @@ export function Section({ title, id, extra, children }: { title: ReactNode; id: 
   );
 }
 
-/** A quiet information box (the theme's info colour is a dark slate, too heavy for notes). */
+/** A quiet information box (the theme's info color is a dark slate, too heavy for notes). */
 export const INFO_STYLE = { background: '#f1f5f9', borderColor: '#cbd5e1' } as const;
 /** A light green for a good outcome (the theme's derived success background is dull on phones). */
 export const SUCCESS_STYLE = { background: '#f0fdf4', borderColor: '#86efac' } as const;
