@@ -105,7 +105,7 @@ export class EscortBookingsService {
       planRevision: move.planRevision,
       travelDates: travelDates(move.requestedDeparture, move.travelDays),
       needsEscorts: coverage.length > 0,
-      escortsNotOnFile: assessment.result.summary.escortsNotOnFile ?? [],
+      escortsNotOnFile: assessment.result.summary.escortsNotOnFile,
       slots: coverage.map((s) => ({
         position: s.position,
         seat: s.seat,

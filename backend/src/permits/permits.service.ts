@@ -210,6 +210,9 @@ export class PermitsService implements OnModuleInit {
       const existing = byCode.get(j.code);
       byCode.delete(j.code);
       const estimate = j.fee?.known ? cents(j.fee.totalUsd) : null;
+      const refundable = j.fee?.known ? j.fee.refundable : null;
+      // a lead time not on file is kept as such: 0 days (file by the departure at the latest), marked unknown
+      const leadTime = { leadTimeDays: j.permit.leadTimeDays ?? 0, leadTimeKnown: j.permit.leadTimeDays !== null };
       const ruleVersion = assessment.ruleVersions[j.code] ?? null;
       if (j.permitRequired && !existing) {
         const roads = move.route.filter((s) => s.jurisdiction === j.code).map((s) => `${s.roads} (${s.miles} mi)`).join('; ');
@@ -221,10 +224,9 @@ export class PermitsService implements OnModuleInit {
           version: 1,
           needed: true,
           estimatedFeeCents: estimate,
-          refundable: j.fee?.known ? j.fee.refundable : null,
+          refundable,
           ruleVersion,
-          leadTimeDays: j.permit.leadTimeDays ?? 0,
-          leadTimeKnown: j.permit.leadTimeDays !== null,
+          ...leadTime,
           routeText: roads || null,
           conditions: { escortsKnown: j.escorts.known, escortsFront: j.escorts.front, escortsRear: j.escorts.rear, heightPole: j.escorts.heightPole },
         });
@@ -249,11 +251,10 @@ export class PermitsService implements OnModuleInit {
       }
       if (existing.status === 'to_file' || existing.status === 'rejected') {
         next.estimatedFeeCents = estimate;
-        next.refundable = j.fee?.known ? j.fee.refundable : null;
+        next.refundable = refundable;
         next.ruleVersion = ruleVersion;
       }
-      next.leadTimeDays = j.permit.leadTimeDays ?? 0;
-      next.leadTimeKnown = j.permit.leadTimeDays !== null;
+      Object.assign(next, leadTime);
       if (j.permitRequired && existing.permitted && (existing.status === 'filed' || existing.status === 'issued' || existing.status === 'needs_amendment')) {
         reasons.push(...permittedDifferences(existing.permitted, factsFromAssessment(assessment, j.code, move.planRevision)));
         if (existing.validFrom && existing.validTo && existing.status !== 'filed') {

@@ -3,7 +3,7 @@ import { InjectRepository } from '@nestjs/typeorm';
 import { LRUCache } from 'lru-cache';
 import { DataSource, Repository } from 'typeorm';
 import {
-  assessJurisdiction, blankRecord, coverageRow, factsOf, rulebookCoverage, validateJurisdictionRule, JURISDICTIONS, jurisdictionByCode, RULEBOOK_DATA,
+  assessJurisdiction, blankRecord, factsOf, isFactRecord, rulebookCoverage, validateJurisdictionRule, JURISDICTIONS, jurisdictionByCode, RULEBOOK_DATA,
   type JurisdictionRule, type JurisdictionSummaryDto, type RuleVersionDto, type RulebookCoverage, type SessionUser,
 } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
@@ -19,8 +19,7 @@ export function initialRecord(code: string, name: string): JurisdictionRule {
 
 /** True when no value of the record is on file (the `sample` column: nothing in it has been read in a text). */
 const nothingOnFile = (r: JurisdictionRule): boolean => factsOf(r).every(([, f]) => f.status === 'unknown');
-/** Records written before every value was a fact (schema 1) carry defaults that read as "none". */
-const isCurrentSchema = (r: unknown): boolean => !!r && typeof r === 'object' && (r as { schema?: unknown }).schema === 2;
+
 
 const toVersionDto = (v: RuleVersion): RuleVersionDto => ({
   code: v.code, version: v.version, record: v.record, note: v.note, createdBy: v.createdBy?.name ?? null, createdAt: v.createdAt.toISOString(),
@@ -93,24 +92,17 @@ export class RulebookService implements OnApplicationBootstrap {
 
   /** Jurisdictions × topics: each cell sourced, secondary, partly or not on file; the counts; the oldest as-of date. */
   async coverage(): Promise<RulebookCoverage> {
-    const rows: { version: number; record: JurisdictionRule }[] = await this.ds.query(
-      `SELECT v.version, v.record FROM jurisdictions j JOIN rule_versions v ON v.code = j.code AND v.version = j.current_version ORDER BY j.code`,
-    );
-    return rulebookCoverage(rows.filter((r) => isCurrentSchema(r.record)).map((r) => ({ record: r.record, version: r.version })));
+    // the current records, through the same version-keyed cache the assessments read
+    const current = await this.currentRules(JURISDICTIONS.map((j) => j.code));
+    return rulebookCoverage([...current.values()].filter((r) => isFactRecord(r.record)).map((r) => ({ record: r.record, version: r.version })));
   }
 
   async list(): Promise<JurisdictionSummaryDto[]> {
-    const rows: { code: string; name: string; version: number; sample: boolean; as_of: string; created_at: Date; record: JurisdictionRule }[] = await this.ds.query(
-      `SELECT j.code, j.name, v.version, v.sample, to_char(v.as_of, 'YYYY-MM-DD') AS as_of, v.created_at, v.record
+    const rows: { code: string; name: string; version: number; sample: boolean; as_of: string; created_at: Date }[] = await this.ds.query(
+      `SELECT j.code, j.name, v.version, v.sample, to_char(v.as_of, 'YYYY-MM-DD') AS as_of, v.created_at
          FROM jurisdictions j JOIN rule_versions v ON v.code = j.code AND v.version = j.current_version ORDER BY j.name`,
     );
-    return rows.map((r) => {
-      const c = isCurrentSchema(r.record) ? coverageRow(r.record) : null;
-      return {
-        code: r.code, name: r.name, version: r.version, sample: r.sample, asOf: r.as_of, updatedAt: new Date(r.created_at).toISOString(),
-        facts: { sourced: c?.sourced ?? 0, secondary: c?.secondary ?? 0, unknown: c?.unknown ?? 0 },
-      };
-    });
+    return rows.map((r) => ({ code: r.code, name: r.name, version: r.version, sample: r.sample, asOf: r.as_of, updatedAt: new Date(r.created_at).toISOString() }));
   }
 
   async current(code: string): Promise<RuleVersionDto> {

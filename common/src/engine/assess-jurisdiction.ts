@@ -22,7 +22,7 @@ import {
 } from './jurisdiction-rule';
 import { MarkingsResult, projectingLoadMarkings } from './markings';
 import { FeeEstimate, FeeNotOnFile, estimatePermitFee } from './permit-fee';
-import { NOT_ON_FILE, PLANNING_CAUTION, RULEBOOK_CAUTION, Reason, SOURCES } from './reasons';
+import { NOT_ON_FILE, NOT_ON_FILE_SOURCE, PLANNING_CAUTION, RULEBOOK_CAUTION, Reason, SOURCES } from './reasons';
 import { formatFeetInches, formatPounds } from './units';
 import { ABSURD, checkNumber } from './validate';
 
@@ -328,7 +328,7 @@ export function assessJurisdiction(rule: JurisdictionRule, input: AssessmentInpu
   if (!escortsKnown) {
     const what = unknownMeasures.length ? ` for ${unknownMeasures.map((x) => MEASURE_LABELS[x]).join(', ')}` : ' for a load over limits in two measures';
     ask('escorts', `escorts${what}`);
-    escortReasons.push({ code: 'escorts-not-on-file', message: `${rule.name}: escort rules${what} ${NOT_ON_FILE}`, source: 'not on file' });
+    escortReasons.push({ code: 'escorts-not-on-file', message: `${rule.name}: escort rules${what} ${NOT_ON_FILE}`, source: NOT_ON_FILE_SOURCE });
   }
   const margin = rule.escorts.heightPoleMarginIn;
   if (heightPole) {
@@ -341,7 +341,7 @@ export function assessJurisdiction(rule: JurisdictionRule, input: AssessmentInpu
       );
     } else {
       ask('escorts.heightPoleMarginIn', 'height-pole margin');
-      escortReasons.push({ code: 'height-pole', message: `set the height pole above the load height ${formatFeetInches(m.heightIn)}; margin ${NOT_ON_FILE}`, source: 'not on file' });
+      escortReasons.push({ code: 'height-pole', message: `set the height pole above the load height ${formatFeetInches(m.heightIn)}; margin ${NOT_ON_FILE}`, source: NOT_ON_FILE_SOURCE });
     }
   }
   const cert = rule.escorts.certification;
@@ -429,7 +429,7 @@ export function assessJurisdiction(rule: JurisdictionRule, input: AssessmentInpu
     permitReasons.push(
       permitKnown
         ? { code: 'within-legal', message: `${rule.name}: within legal dimensions and weights on file; no permit needed`, source: weightSource }
-        : { code: 'permit-not-on-file', message: `${rule.name}: within the limits on file, but ${legalCheck.unknown.map((u) => u.topic.replace('legal.', '')).join(', ')} ${NOT_ON_FILE}`, source: 'not on file' },
+        : { code: 'permit-not-on-file', message: `${rule.name}: within the limits on file, but ${legalCheck.unknown.map((u) => u.topic.replace('legal.', '')).join(', ')} ${NOT_ON_FILE}`, source: NOT_ON_FILE_SOURCE },
     );
   }
   return {

@@ -32,6 +32,9 @@ export type UnknownFact = { status: 'unknown'; note: string };
 /** One rule value with its own status and source. */
 export type Fact<T> = KnownFact<T> | UnknownFact;
 
+/** True for a record of the current schema (every value a fact); older versions kept in history are not. */
+export const isFactRecord = (r: unknown): r is JurisdictionRule => !!r && typeof r === 'object' && (r as { schema?: unknown }).schema === 2;
+
 export const isKnown = <T>(f: Fact<T> | undefined | null): f is KnownFact<T> => !!f && f.status !== 'unknown';
 /** The value of a known fact, else undefined. */
 export const valueOf = <T>(f: Fact<T> | undefined | null): T | undefined => (isKnown(f) ? f.value : undefined);

@@ -10,7 +10,7 @@ import {
   type SignRule,
   type Trigger,
 } from './jurisdiction-rule';
-import { PLANNING_CAUTION, Reason, SOURCES } from './reasons';
+import { NOT_ON_FILE_SOURCE, PLANNING_CAUTION, Reason, SOURCES } from './reasons';
 import { formatFeetInches } from './units';
 import { ABSURD, checkNumber } from './validate';
 
@@ -185,7 +185,7 @@ export function projectingLoadMarkings(input: MarkingsInput, rule?: Jurisdiction
   const notOnFile = rule ? { signs: !isKnown(rule.signs), flags: !isKnown(rule.flags), lamps: !isKnown(rule.lamps) } : undefined;
   if (notOnFile) {
     for (const [topic, missing] of Object.entries(notOnFile)) {
-      if (missing) reasons.push({ code: `not-on-file-${topic}`, message: `${name}: ${topic} rules not on file — check the permit`, source: 'not on file' });
+      if (missing) reasons.push({ code: `not-on-file-${topic}`, message: `${name}: ${topic} rules not on file — check the permit`, source: NOT_ON_FILE_SOURCE });
     }
   }
   return { sideFlags, rearFlags, flags, lamps, reflectors, signs, escortSigns, reasons, ...(notOnFile ? { notOnFile } : {}), caution: PLANNING_CAUTION };

@@ -211,7 +211,7 @@ export function planCheck(plan: PlanInput): PlanCheckResult {
   for (const [code, segs] of byCode) {
     const found = rules.get(code);
     const rule = found ?? blankRecord(code, jurisdictionByCode(code)?.name ?? code, '1970-01-01', 'no rulebook record');
-    if (!found) problems.push(`${code}: no rulebook record; every topic ${'not on file'}`);
+    if (!found) problems.push(`${code}: no rulebook record; every topic not on file`);
     const miles = segs.reduce((s, x) => s + x.miles, 0);
     const roadTypes = [...new Set(segs.map((s) => s.roadType))];
     const assessment = assessJurisdiction(rule, {

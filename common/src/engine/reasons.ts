@@ -10,6 +10,8 @@ export const RULEBOOK_CAUTION =
 
 /** How a topic the rulebook lacks reads, everywhere: never as "none". */
 export const NOT_ON_FILE = 'not on file — check the permit';
+/** The `source` of a reason about a topic not on file (there is no text to cite). */
+export const NOT_ON_FILE_SOURCE = 'not on file';
 
 export type Unit = 'in' | 'ft' | 'lb' | 'usd' | 'min' | 'count' | 'psi';
 

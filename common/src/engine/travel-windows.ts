@@ -1,7 +1,7 @@
 /** Legal travel windows for one day in one jurisdiction. */
 import { HOLIDAY_NAMES, holidayDayNumber, observedDayNumber } from './holidays';
 import { JurisdictionRule, RoadType, TravelRules, appliesTo, cite, isKnown } from './jurisdiction-rule';
-import { NOT_ON_FILE, Reason } from './reasons';
+import { NOT_ON_FILE, NOT_ON_FILE_SOURCE, Reason } from './reasons';
 import { sunTimesMs, checkLatLon } from './sun-times';
 import { checkTimeZone, dayNumberOf, localClock, weekdayOf, zoneOffsetMinutes, zonedTimeToUtc } from './time-zone';
 import { parseIsoDate } from './validate';
@@ -119,7 +119,7 @@ export function travelWindows(input: TravelWindowsInput): TravelWindowsResult {
   const unknownTopics: string[] = [];
   const notOnFile = (topic: string, what: string): void => {
     unknownTopics.push(topic);
-    restrictions.push({ code: `not-on-file-${topic}`, message: `${who}: ${what} ${NOT_ON_FILE}`, source: 'not on file' });
+    restrictions.push({ code: `not-on-file-${topic}`, message: `${who}: ${what} ${NOT_ON_FILE}`, source: NOT_ON_FILE_SOURCE });
   };
   const dims = { widthIn: load.widthIn, heightIn: load.heightIn, lengthIn: load.lengthIn, grossLb: load.grossLb };
 

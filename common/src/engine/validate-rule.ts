@@ -37,7 +37,7 @@ const inches = (field: string, v: unknown, min = 0, max: number = ABSURD.lengthI
 const pounds = (field: string, v: unknown, min = 0, max: number = ABSURD.weightLb): number => checkNumber(field, v, { min, max, unit: 'lb' });
 const usd = (field: string, v: unknown): number => {
   const n = checkNumber(field, v, { min: 0, max: 1_000_000, unit: 'usd' });
-  if (Math.round(n * 100) !== n * 100 && Math.abs(Math.round(n * 1e6) - n * 1e6) > 1e-6) fail(field, 'must have at most six decimal places');
+  if (Math.abs(Math.round(n * 1e6) - n * 1e6) > 1e-6) fail(field, 'must have at most six decimal places');
   return n;
 };
 function clock(field: string, v: unknown): number {

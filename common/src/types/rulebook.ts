@@ -5,11 +5,10 @@ export type JurisdictionSummaryDto = {
   code: string;
   name: string;
   version: number;
+  /** True when no value of the record is on file (nothing in it has been read in a text). */
   sample: boolean;
   asOf: string;
   updatedAt: string;
-  /** How many values of the current record are sourced, secondary or not on file. */
-  facts: { sourced: number; secondary: number; unknown: number };
 };
 
 export type RuleVersionDto = {

@@ -1,5 +1,5 @@
 import { Tag, Tooltip, Typography } from 'antd';
-import type { Fact, OpenQuestion } from '@amberline/common';
+import { NOT_ON_FILE_SOURCE, type Fact, type OpenQuestion } from '@amberline/common';
 
 /** A known fact's status, citation, edition and as-of date, linked to the text it was read in. */
 export function FactSource({ fact }: { fact: Fact<unknown> }) {
@@ -62,7 +62,7 @@ export function OpenQuestions({ questions }: { questions: OpenQuestion[] }) {
 
 /** A citation string as the engine writes it, with secondary sources and topics not on file made visible. */
 export function CitedSource({ text }: { text: string }) {
-  if (text === 'not on file') return <NotOnFile />;
+  if (text === NOT_ON_FILE_SOURCE) return <NotOnFile />;
   const secondary = /\(secondary source\)/.test(text);
   return (
     <Typography.Text type="secondary" style={{ fontSize: 12 }}>

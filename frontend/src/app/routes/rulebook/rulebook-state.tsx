@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Alert, Breadcrumb, Button, Card, Modal, Space, Spin, Table, Tag, Typography } from 'antd';
 import { Link, useParams } from 'react-router-dom';
-import { RULEBOOK_CAUTION, coverageRow, type RuleVersionDto } from '@amberline/common';
+import { RULEBOOK_CAUTION, coverageRow, isFactRecord, type RuleVersionDto } from '@amberline/common';
 import dayjs from 'dayjs';
 import { RuleDiff } from '../../../features/rulebook/components/rule-diff';
 import { useRule } from '../../../features/rulebook/api/get-rule';
@@ -27,7 +27,7 @@ export function RulebookStatePage() {
   if (rule.isError) return <Alert type="error" showIcon title={rule.error.message} />;
   const current = rule.data;
   const view = shown ?? current;
-  const counts = (current.record as { schema?: number }).schema === 2 ? coverageRow(current.record) : null;
+  const counts = isFactRecord(current.record) ? coverageRow(current.record) : null;
 
   return (
     <div>

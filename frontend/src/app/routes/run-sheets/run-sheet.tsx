@@ -114,7 +114,7 @@ export function RunSheetPage() {
       <RunSheetHeader sheet={sheet} />
       <DepartureStatus sheet={sheet} />
       <CautionsBox cautions={sheet.cautions} />
-      <OpenQuestions questions={sheet.openQuestions ?? []} />
+      <OpenQuestions questions={sheet.openQuestions} />
 
       <nav className="no-print" aria-label="Sections" style={{ display: 'flex', gap: 6, overflowX: 'auto', paddingBottom: 6, marginBottom: 8 }}>
         {JUMPS.map(([id, label]) => (
@@ -134,7 +134,7 @@ export function RunSheetPage() {
         <PermitsSection permits={sheet.permits} />
       </Section>
       <Section id="escorts" title="Escorts">
-        {(sheet.openQuestions ?? [])
+        {sheet.openQuestions
           .filter((q) => q.topic === 'escorts')
           .map((q) => (
             <div key={q.jurisdiction} style={{ marginBottom: 6 }}>

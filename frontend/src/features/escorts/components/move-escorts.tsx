@@ -37,7 +37,7 @@ export function MoveEscorts({ moveId }: { moveId: string }) {
   return (
     <div data-testid="move-escorts">
       <Alert type="warning" showIcon title={d.caution} style={{ marginBottom: 12 }} />
-      {(d.escortsNotOnFile ?? []).length > 0 && (
+      {d.escortsNotOnFile.length > 0 && (
         <Alert
           type="warning"
           showIcon
@@ -47,7 +47,7 @@ export function MoveEscorts({ moveId }: { moveId: string }) {
           description="The rulebook has no escort rule on file for this load there; book what the issued permit asks."
         />
       )}
-      {!d.needsEscorts && (d.escortsNotOnFile ?? []).length > 0 ? null : !d.needsEscorts ? (
+      {!d.needsEscorts && d.escortsNotOnFile.length > 0 ? null : !d.needsEscorts ? (
         <Alert
           type="info"
           showIcon

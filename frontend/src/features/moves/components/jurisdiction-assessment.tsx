@@ -188,7 +188,7 @@ function JurisdictionHeader({ j, version }: { j: JurisdictionPlanResult; version
       )}
       {j.travel.length > 0 && j.travel.every((t) => !t.allowed) && <Tag color="red">no travel window</Tag>}
       <span style={{ fontSize: 12, color: '#64748b' }}>
-        {version !== undefined ? `rule v${version}, ` : ''}as of {j.asOf}
+        {j.ruleFound ? `${version !== undefined ? `rule v${version}, ` : ''}as of ${j.asOf}` : ''}
       </span>
       {!j.ruleFound && <Tag color="red">no rulebook record</Tag>}
     </Space>

@@ -164,7 +164,7 @@ export function AssessmentTotals({ result, column }: { result: PlanCheckResult; 
           {
             key: 'e',
             label: 'Escorts (most at once)',
-            children: (s.escortsNotOnFile ?? []).length ? (
+            children: s.escortsNotOnFile.length ? (
               <span>
                 {s.maxEscortsFront + s.maxEscortsRear > 0 ? `at least ${s.maxEscortsFront} front, ${s.maxEscortsRear} rear; ` : ''}
                 <NotOnFile>not on file for {s.escortsNotOnFile.join(', ')} — check the permit</NotOnFile>
@@ -176,7 +176,7 @@ export function AssessmentTotals({ result, column }: { result: PlanCheckResult; 
           {
             key: 'f',
             label: 'Estimated fees',
-            children: (s.feesNotOnFile ?? []).length ? (
+            children: s.feesNotOnFile.length ? (
               <span>
                 {formatUsd(s.estimatedFeesUsd)} on file + <NotOnFile>unknown for {s.feesNotOnFile.join(', ')}</NotOnFile>
               </span>
@@ -191,7 +191,7 @@ export function AssessmentTotals({ result, column }: { result: PlanCheckResult; 
             children: (
               <span>
                 {s.earliestDeparture ? `${dayjs(s.earliestDeparture).format('ddd D MMM YYYY, HH:mm')} (your time zone)` : 'no window on the planned dates'}
-                {s.earliestDepartureKnown === false && (
+                {!s.earliestDepartureKnown && (
                   <>
                     {' '}
                     <NotOnFile>travel rules of the first state not on file</NotOnFile>

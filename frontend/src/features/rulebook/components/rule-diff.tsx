@@ -1,6 +1,6 @@
 /** Two versions of a record side by side: every fact whose status, value or source differs. */
 import { Table, Typography } from 'antd';
-import { factsOf, type Fact, type RuleVersionDto } from '@amberline/common';
+import { factsOf, isFactRecord, type Fact, type RuleVersionDto } from '@amberline/common';
 import { FactSource, NotOnFile } from '../../../components/rule-source';
 import { FACT_LABELS, describeValue } from './fact-labels';
 
@@ -19,16 +19,15 @@ const cell = (path: string, f: Fact<unknown> | undefined) =>
   );
 
 export function RuleDiff({ from, to }: { from: RuleVersionDto; to: RuleVersionDto }) {
-  const schema2 = (v: RuleVersionDto) => (v.record as { schema?: number }).schema === 2;
-  const a = new Map(schema2(from) ? factsOf(from.record) : []);
-  const b = new Map(schema2(to) ? factsOf(to.record) : []);
+  const a = new Map(isFactRecord(from.record) ? factsOf(from.record) : []);
+  const b = new Map(isFactRecord(to.record) ? factsOf(to.record) : []);
   const paths = [...new Set([...a.keys(), ...b.keys()])];
   const rows: Row[] = paths.filter((p) => JSON.stringify(a.get(p)) !== JSON.stringify(b.get(p))).map((p) => ({ path: p, a: a.get(p), b: b.get(p) }));
   return (
     <div data-testid="rule-diff">
       <Typography.Paragraph type="secondary">
         {rows.length} value{rows.length === 1 ? '' : 's'} differ between v{from.version} and v{to.version}
-        {!schema2(from) || !schema2(to) ? ' (a version from before sourced facts shows no facts)' : ''}.
+        {!isFactRecord(from.record) || !isFactRecord(to.record) ? ' (a version from before sourced facts shows no facts)' : ''}.
       </Typography.Paragraph>
       <Table<Row>
         size="small"

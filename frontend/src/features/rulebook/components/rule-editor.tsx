@@ -1,6 +1,6 @@
 import { useEffect, useMemo, useState } from 'react';
 import { Alert, App, Button, Collapse, Drawer, Input, InputNumber, Select, Space, Tabs, Typography } from 'antd';
-import { COVERAGE_TOPICS, factsOf, validateJurisdictionRule, type Fact, type JurisdictionRule } from '@amberline/common';
+import { COVERAGE_TOPICS, factsOf, validateJurisdictionRule, type JurisdictionRule } from '@amberline/common';
 import { ApiError } from '../../../lib/api-client';
 import { useUpdateRule } from '../api/update-rule';
 import { FACT_LABELS } from './fact-labels';
@@ -92,6 +92,8 @@ export function RuleEditor({ open, code, record, onClose }: { open: boolean; cod
   const [draft, setDraft] = useState<JurisdictionRule>(record);
   const [text, setText] = useState('');
   const [tab, setTab] = useState('form');
+  /** Bumped when the raw tab hands a record back, so every field starts from it. */
+  const [formKey, setFormKey] = useState(0);
   const [note, setNote] = useState('');
   const [serverError, setServerError] = useState<string[]>([]);
   const update = useUpdateRule();
@@ -129,6 +131,7 @@ export function RuleEditor({ open, code, record, onClose }: { open: boolean; cod
     else {
       try {
         setDraft(JSON.parse(text));
+        setFormKey((k) => k + 1);
       } catch {
         /* keep the form's draft when the raw text does not parse */
       }
@@ -154,8 +157,7 @@ export function RuleEditor({ open, code, record, onClose }: { open: boolean; cod
     <Drawer
       open={open}
       onClose={onClose}
-      size="large"
-      width={1100}
+      size={1100}
       title={`Edit the ${code} record`}
       extra={
         <Button type="primary" onClick={save} disabled={!check.record || !note.trim()} loading={update.isPending} data-testid="save-rule">
@@ -180,6 +182,7 @@ export function RuleEditor({ open, code, record, onClose }: { open: boolean; cod
               label: 'By topic',
               children: (
                 <Collapse
+                  key={formKey}
                   items={COVERAGE_TOPICS.map((t) => ({
                     key: t.key,
                     label: t.label,
@@ -204,4 +207,3 @@ export function RuleEditor({ open, code, record, onClose }: { open: boolean; cod
   );
 }
 
-export type { Fact };

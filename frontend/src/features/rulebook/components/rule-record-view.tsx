@@ -1,13 +1,13 @@
 /** A rule record by topic: every value with its status and source; a topic not on file says so in its own style. */
 import { Card, Table, Typography } from 'antd';
-import { COVERAGE_TOPICS, factsOf, type Fact, type JurisdictionRule } from '@amberline/common';
+import { COVERAGE_TOPICS, factsOf, isFactRecord, type Fact, type JurisdictionRule } from '@amberline/common';
 import { FactSource, NotOnFile } from '../../../components/rule-source';
 import { FACT_LABELS, describeValue } from './fact-labels';
 
 type Row = { key: string; label: string; fact: Fact<unknown> };
 
 export function RuleRecordView({ record }: { record: JurisdictionRule }) {
-  if ((record as { schema?: number }).schema !== 2) {
+  if (!isFactRecord(record)) {
     return (
       <Card size="small" style={{ marginBottom: 12 }}>
         <Typography.Paragraph>This version predates sourced facts; its raw record:</Typography.Paragraph>
