@@ -403,6 +403,30 @@ describe('escort vendors and bookings (/api/vendors, /api/moves/:id/escort-booki
       expect(hist.find((h) => h.action === 'stage')?.after.notes).toEqual([expect.stringMatching(/^no escort needed: the assessment asks for no escort in Texas \(rulebook v\d+\)$/)]);
     });
 
+    it('escorts not on file for a state stay an open question until the issued permit’s escort condition is recorded', async () => {
+      // Georgia's record has its escort rules not on file: a 15 ft wide load there asks the permit, never "no escort"
+      const move = await newMove({ route: [{ order: 1, jurisdiction: 'GA', roads: 'US 341', miles: 90, roadType: 'two-lane', zip: '31015' }], origin: 'Cordele, GA', destination: 'Perry, GA' });
+      expect((await escortsOf(move.id)).escortsNotOnFile).toEqual(['GA']);
+      expect((await t.http().post(`/api/moves/${move.id}/permits/sync`).set(as('permit_clerk'))).status).toBe(200);
+      const [permit] = (await t.http().get(`/api/moves/${move.id}/permits`).set(as('permit_clerk'))).body;
+      // the permit is not pre-filled with 0 escorts
+      expect(permit.conditions).toEqual({ escortsKnown: false });
+      await t.ds.query(`UPDATE permits SET status = 'issued' WHERE id = $1`, [permit.id]);
+      await skipToPermitsReceived(move.id);
+      const refused = await t.http().post(`/api/moves/${move.id}/stage`).set(as('dispatcher')).send({ to: 'escorts_booked' });
+      expect(refused.status).toBe(409);
+      expect(refused.body.details.unmet).toEqual([
+        { code: 'escorts_not_on_file', jurisdiction: 'GA', message: 'GA escorts: not on file in the rulebook — record the escorts the issued permit asks (front and rear, 0 if none)' },
+      ]);
+      const current = (await t.http().get(`/api/permits/${permit.id}`).set(as('permit_clerk'))).body;
+      const recorded = await t.http().patch(`/api/permits/${permit.id}`).set(as('permit_clerk')).send({ version: current.version, conditions: { escortsFront: 0, escortsRear: 0 } });
+      expect(recorded.status).toBe(200);
+      const ok = await t.http().post(`/api/moves/${move.id}/stage`).set(as('dispatcher')).send({ to: 'escorts_booked' });
+      expect(ok.status).toBe(201);
+      const hist = (await t.http().get(`/api/moves/${move.id}/history`).set(as('dispatcher'))).body as { action: string; after: { notes?: string[] } }[];
+      expect(hist.find((h) => h.action === 'stage')?.after.notes).toEqual(['escorts not on file in the rulebook for GA: taken from the issued permit']);
+    });
+
     it('a plan change that raises the requirement, or moves the dates, shows as unmet again', async () => {
       const v = await seedVendor(t.ds);
       let move = await newMove();

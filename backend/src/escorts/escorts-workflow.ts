@@ -43,8 +43,14 @@ export class EscortsWorkflow implements MoveExtension, OnModuleInit {
     if (ctx.to !== 'escorts_booked') return [];
     const coverage = await coverageOf(ctx.manager, ctx.move, ctx.assessment);
     if (!coverage.length) {
-      const codes = ctx.assessment.result.jurisdictions.map((j) => `${j.name} (rulebook v${ctx.assessment.ruleVersions[j.code] ?? '–'})`);
-      return [`no escort needed: the assessment asks for no escort in ${codes.join(', ')}`];
+      // a state whose escort rules are not on file was answered by its issued permit (the permits guard), not by the rulebook
+      const open = new Set(ctx.assessment.result.summary.escortsNotOnFile);
+      const known = ctx.assessment.result.jurisdictions.filter((j) => !open.has(j.code));
+      const codes = known.map((j) => `${j.name} (rulebook v${ctx.assessment.ruleVersions[j.code] ?? '–'})`);
+      return [
+        ...(known.length ? [`no escort needed: the assessment asks for no escort in ${codes.join(', ')}`] : []),
+        ...(open.size ? [`escorts not on file in the rulebook for ${[...open].join(', ')}: taken from the issued permit`] : []),
+      ];
     }
     return coverage.map((s) => `${slotLabel(s.position, s.seat)} confirmed: ${s.jurisdictions.map((j) => `${j.code} by ${j.vendor}`).join(', ')}`);
   }

@@ -4,6 +4,7 @@ import {
   canPermitTransition, OPEN_PERMIT_STATUSES, PERMIT_STATUS_LABELS, PERMIT_STATUSES,
   type AssessmentDto, type AssignPermitsResponse, type PermitDto, type PermitOverviewDto, type PermitsPage, type PermitStatus,
   type SessionUser, type SyncPermitsResponse, type UnmetCondition,
+  type PermitConditions,
 } from '@amberline/common';
 import { AuditService, diff } from '../audit/audit.service';
 import { preparedQuery } from '../database/prepared';
@@ -228,7 +229,10 @@ export class PermitsService implements OnModuleInit {
           ruleVersion,
           ...leadTime,
           routeText: roads || null,
-          conditions: { escortsKnown: j.escorts.known, escortsFront: j.escorts.front, escortsRear: j.escorts.rear, heightPole: j.escorts.heightPole },
+          // escorts not on file are left for the clerk to record from the issued permit (never pre-filled as 0)
+          conditions: j.escorts.known
+            ? { escortsKnown: true, escortsFront: j.escorts.front, escortsRear: j.escorts.rear, heightPole: j.escorts.heightPole }
+            : { escortsKnown: false },
         });
         const saved = await m.save(p);
         await m.insert(PermitVersion, { permitId: saved.id, version: 1, status: 'to_file', snapshot: snapshotOf(saved), reason: why, createdById: actor?.id ?? null });
@@ -401,6 +405,7 @@ export class PermitsService implements OnModuleInit {
    * has are checked again (one flagged for amendment, unpaid or expired holds the move back).
    */
   async unmetConditions(ctx: TransitionContext, now = new Date()): Promise<UnmetCondition[]> {
+    if (ctx.to === 'escorts_booked') return this.escortsAnsweredByPermits(ctx);
     if (ctx.to !== 'permits_received' && ctx.to !== 'running') return [];
     const needed = ctx.assessment.result.summary.permitsNeeded;
     if (!needed.length) return [];
@@ -436,5 +441,28 @@ export class PermitsService implements OnModuleInit {
       }
     }
     return out;
+  }
+
+  /**
+   * Escorts the rulebook has not on file for this load are an open question until the state's permit answers it: the
+   * clerk records the permit's escort counts (front and rear, 0 when it asks none) before escorts can be called booked.
+   */
+  private async escortsAnsweredByPermits(ctx: TransitionContext): Promise<UnmetCondition[]> {
+    const open = ctx.assessment.result.summary.escortsNotOnFile;
+    if (!open.length) return [];
+    const rows: { jurisdiction: string; conditions: PermitConditions }[] = await ctx.manager.query(
+      `SELECT jurisdiction, conditions FROM permits WHERE move_id = $1 AND status = 'issued' AND jurisdiction = ANY($2)`,
+      [ctx.move.id, open],
+    );
+    return open
+      .filter((code) => {
+        const c = rows.find((r) => r.jurisdiction === code)?.conditions;
+        return c?.escortsFront === undefined || c?.escortsRear === undefined;
+      })
+      .map((code) => ({
+        code: 'escorts_not_on_file',
+        jurisdiction: code,
+        message: `${code} escorts: not on file in the rulebook — record the escorts the issued permit asks (front and rear, 0 if none)`,
+      }));
   }
 }

@@ -97,11 +97,10 @@ export type JurisdictionAssessment = {
   cautions: string[];
 };
 
-const src = (f: KnownFact<unknown>): string => cite(f);
 const reasonFrom = (code: string, message: string, f: KnownFact<unknown> | string, extra: Partial<Reason> = {}): Reason => ({
   code,
   message,
-  source: typeof f === 'string' ? f : src(f),
+  source: typeof f === 'string' ? f : cite(f),
   ...extra,
 });
 

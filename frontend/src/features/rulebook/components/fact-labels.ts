@@ -1,5 +1,5 @@
 /** Labels and plain-language values for the facts of a rule record, shared by the view, the editor and the diff. */
-import { formatFeetInches, formatPounds, type Fact } from '@amberline/common';
+import { formatFeetInches, formatPounds } from '@amberline/common';
 
 export const FACT_LABELS: Record<string, string> = {
   'legal.widthIn': 'Legal width',
@@ -80,5 +80,3 @@ export function describeValue(path: string, value: unknown): string {
   }
   return JSON.stringify(value);
 }
-
-export const describeFact = (path: string, f: Fact<unknown>): string => (f.status === 'unknown' ? 'not on file' : describeValue(path, f.value));
