@@ -268,14 +268,21 @@ export function assessJurisdiction(rule: JurisdictionRule, input: AssessmentInpu
   const legalCheck = legalDimensionCheck(rule, m);
   const permitReasons: Reason[] = [...legalCheck.over];
 
-  // Weights: the state's own limits where on file; else the federal Interstate limits, said so.
+  // Weights: each of the state's own limits where on file; the federal Interstate limit for any not on file, said so.
   const L = rule.legal;
-  const weightFacts: Fact<unknown>[] = [L.singleAxleLb, L.tandemLb, L.grossLb, L.bridge];
-  const weightsKnown = weightFacts.every((f) => isKnown(f));
+  const weightFacts: [string, Fact<unknown>][] = [
+    ['single axle', L.singleAxleLb],
+    ['tandem', L.tandemLb],
+    ['gross', L.grossLb],
+    ['bridge formula', L.bridge],
+  ];
+  const missingWeights = weightFacts.filter(([, f]) => !isKnown(f)).map(([what]) => what);
+  const weightsKnown = missingWeights.length === 0;
   const bridge = valueOf(L.bridge);
-  const weightSource = weightsKnown
-    ? [...new Set(weightFacts.map((f) => cite(f as KnownFact<unknown>)))].join('; ')
-    : `${SOURCES.usc127} (federal Interstate limits: ${rule.name}'s own weight limits ${NOT_ON_FILE})`;
+  const weightSource = [
+    ...new Set(weightFacts.flatMap(([, f]) => (isKnown(f) ? [cite(f)] : []))),
+    ...(weightsKnown ? [] : [`${SOURCES.usc127} (federal Interstate limits for the ${missingWeights.join(', ')}: ${rule.name}'s own ${NOT_ON_FILE})`]),
+  ].join('; ');
   const limits = {
     singleAxleLb: valueOf(L.singleAxleLb) ?? 20_000,
     tandemLb: valueOf(L.tandemLb) ?? 34_000,
@@ -308,7 +315,7 @@ export function assessJurisdiction(rule: JurisdictionRule, input: AssessmentInpu
   // a limit not on file only leaves the answer open when nothing on file already asks for a permit
   const permitKnown = permitRequired || legalCheck.unknown.length === 0;
   if (!permitRequired) openQuestions.push(...legalCheck.unknown);
-  if (!weightsKnown && (overweight || m.grossLb > 80_000)) ask('legal.weights', 'legal axle and gross weights');
+  if (!weightsKnown && (overweight || m.grossLb > 80_000)) ask('legal.weights', `legal ${missingWeights.join(', ')} limits`);
 
   // Escorts, by measure: a measure the load needs whose rules are not on file leaves the answer open.
   const unknownMeasures: Measure[] = [];

@@ -160,7 +160,16 @@ export function PermitDeskPage() {
           setFilter((f) => ({ ...f, page: sort !== f.sort || pg.pageSize !== f.pageSize ? 1 : (pg.current ?? 1), pageSize: pg.pageSize ?? f.pageSize, sort }));
         }}
         columns={[
-          { key: 'fileBy', title: 'Urgency', sorter: true, sortOrder: order(filter, 'fileBy'), render: (_: unknown, p) => <UrgencyTag urgency={p.urgency} daysToFileBy={p.daysToFileBy} fileBy={p.fileBy} /> },
+          { key: 'fileBy', title: 'Urgency', sorter: true, sortOrder: order(filter, 'fileBy'), render: (_: unknown, p) => (
+            <>
+              <UrgencyTag urgency={p.urgency} daysToFileBy={p.daysToFileBy} fileBy={p.fileBy} />
+              {p.leadTimeDays === null && (
+                <div style={{ marginTop: 2 }}>
+                  <NotOnFile what="The state's lead time is not on file: the file-by date is the departure itself">lead time not on file</NotOnFile>
+                </div>
+              )}
+            </>
+          ) },
           { key: 'move', title: 'Move', render: (_: unknown, p) => <span><Link to={to.move(p.moveId)}>{p.moveReference}</Link><div><Typography.Text type="secondary">{p.customer}</Typography.Text></div></span> },
           { key: 'jurisdiction', title: 'State', sorter: true, sortOrder: order(filter, 'jurisdiction'), render: (_: unknown, p) => <Button type="link" size="small" onClick={() => setOpen(p.id)} data-testid={`desk-open-${p.moveReference}-${p.jurisdiction}`}>{p.jurisdictionName}</Button> },
           { key: 'type', title: 'Type', render: (_: unknown, p) => PERMIT_TYPE_LABELS[p.permitType] },

@@ -50,6 +50,11 @@ export function RulebookPage() {
         <Typography.Paragraph data-testid="coverage-totals">
           {t.jurisdictions} jurisdictions, {t.facts} values: <strong>{t.sourced}</strong> sourced, <strong>{t.secondary}</strong> secondary,{' '}
           <strong>{t.unknown}</strong> not on file ({Math.round(((t.sourced + t.secondary) / Math.max(1, t.facts)) * 100)}% on file). Oldest value read {t.oldestAsOf ?? '—'}.
+          <br />
+          <Typography.Text type="secondary" style={{ fontSize: 12 }}>
+            <em>sourced</em>: every value of the topic read in the state&apos;s own statute, code or DOT / state-patrol documents · <em>secondary</em>: all on file, some from a
+            federal or university summary · <em>partly</em>: some values on file · <em>not on file</em>: none; moves read it as an open question for the permit.
+          </Typography.Text>
         </Typography.Paragraph>
       )}
       <Table<CoverageRow>

@@ -1,9 +1,9 @@
 import { useEffect, useMemo, useState } from 'react';
-import { Alert, App, Button, Collapse, Drawer, Input, InputNumber, Select, Space, Tabs, Typography } from 'antd';
-import { COVERAGE_TOPICS, factsOf, validateJurisdictionRule, type JurisdictionRule } from '@amberline/common';
+import { Alert, App, Button, Checkbox, Collapse, Drawer, Input, InputNumber, Select, Space, Tabs, Typography } from 'antd';
+import { COVERAGE_TOPICS, ESCORT_MEASURES, ROAD_TYPES, factsOf, formatFeetInches, validateJurisdictionRule, type EscortRule, type JurisdictionRule, type Measure, type RoadType } from '@amberline/common';
 import { ApiError } from '../../../lib/api-client';
 import { useUpdateRule } from '../api/update-rule';
-import { FACT_LABELS } from './fact-labels';
+import { FACT_LABELS, describeValue } from './fact-labels';
 
 type AnyFact = { status: string; value?: unknown; citation?: string; url?: string; edition?: string; asOf?: string; quote?: string; note?: string };
 
@@ -17,6 +17,61 @@ function withFact(r: JurisdictionRule, path: string, f: AnyFact): JurisdictionRu
 }
 
 const NUMERIC = /(In|Lb|Days|Ft|LbPerInch)$/;
+const ESCORT_PATHS = new Set<string>(ESCORT_MEASURES.map((m) => `escorts.${m}`));
+
+/** Escort rules of one measure as rows: "over" / "or more", threshold, road classes, front, rear, height pole. */
+function EscortRulesField({ path, rules, onChange }: { path: string; rules: EscortRule[]; onChange: (r: EscortRule[]) => void }) {
+  const measure = path.split('.')[1] as Measure;
+  const set = (i: number, patch: Partial<EscortRule>) => onChange(rules.map((r, k) => (k === i ? { ...r, ...patch } : r)));
+  const threshold = (r: EscortRule) => r.when.over ?? r.when.atLeast ?? 0;
+  return (
+    <div data-testid={`escort-rows-${measure}`}>
+      {rules.map((r, i) => (
+        <Space key={i} wrap size={6} style={{ display: 'flex', marginBottom: 4 }}>
+          <Select
+            size="small"
+            style={{ width: 96 }}
+            value={r.when.over !== undefined ? 'over' : 'atLeast'}
+            onChange={(k) => set(i, { when: k === 'over' ? { measure, over: threshold(r) } : { measure, atLeast: threshold(r) } })}
+            options={[
+              { value: 'over', label: 'over' },
+              { value: 'atLeast', label: 'or more' },
+            ]}
+            aria-label={`${path} rule ${i + 1} comparison`}
+          />
+          <InputNumber
+            size="small"
+            min={0}
+            value={threshold(r)}
+            addonAfter="in"
+            style={{ width: 120 }}
+            onChange={(v) => set(i, { when: r.when.over !== undefined ? { measure, over: v ?? 0 } : { measure, atLeast: v ?? 0 } })}
+            aria-label={`${path} rule ${i + 1} threshold`}
+          />
+          <Typography.Text type="secondary" style={{ width: 50 }}>
+            {formatFeetInches(threshold(r))}
+          </Typography.Text>
+          <Checkbox.Group
+            value={r.roads}
+            onChange={(v) => set(i, { roads: v as RoadType[] })}
+            options={ROAD_TYPES.map((x) => ({ value: x, label: x }))}
+          />
+          <InputNumber size="small" min={0} max={10} value={r.front} addonBefore="front" style={{ width: 110 }} onChange={(v) => set(i, { front: v ?? 0 })} />
+          <InputNumber size="small" min={0} max={10} value={r.rear} addonBefore="rear" style={{ width: 105 }} onChange={(v) => set(i, { rear: v ?? 0 })} />
+          <Checkbox checked={!!r.heightPole} onChange={(e) => set(i, { heightPole: e.target.checked || undefined })}>
+            height pole
+          </Checkbox>
+          <Button size="small" type="link" danger onClick={() => onChange(rules.filter((_, k) => k !== i))}>
+            remove
+          </Button>
+        </Space>
+      ))}
+      <Button size="small" onClick={() => onChange([...rules, { when: { measure, over: 0 }, roads: [...ROAD_TYPES], front: 1, rear: 0 }])}>
+        Add a threshold
+      </Button>
+    </div>
+  );
+}
 
 /** One value with its status and the source fields beside it. */
 function FactFields({ path, fact, onChange }: { path: string; fact: AnyFact; onChange: (f: AnyFact) => void }) {
@@ -48,7 +103,9 @@ function FactFields({ path, fact, onChange }: { path: string; fact: AnyFact; onC
           ]}
         />
         {known &&
-          (numeric ? (
+          (ESCORT_PATHS.has(path) ? (
+            <EscortRulesField path={path} rules={Array.isArray(fact.value) ? (fact.value as EscortRule[]) : []} onChange={(v) => set('value', v)} />
+          ) : numeric ? (
             <InputNumber size="small" value={fact.value as number} onChange={(v) => set('value', v ?? undefined)} aria-label={`${path} value`} />
           ) : (
             <Input.TextArea
@@ -82,6 +139,11 @@ function FactFields({ path, fact, onChange }: { path: string; fact: AnyFact; onC
         <Input size="small" style={{ width: 520, marginTop: 4, marginLeft: 238 }} placeholder="what was searched" value={fact.note} onChange={(e) => set('note', e.target.value)} aria-label={`${path} note`} />
       )}
       {jsonError && <div style={{ marginLeft: 238, color: '#b91c1c', fontSize: 12 }}>{jsonError}</div>}
+      {known && !numeric && !jsonError && fact.value !== undefined && (
+        <div style={{ marginLeft: 238, fontSize: 12, color: '#475569' }} data-testid={`fact-reads-${path}`}>
+          reads: {describeValue(path, fact.value)}
+        </div>
+      )}
     </div>
   );
 }
