@@ -128,6 +128,15 @@ describe('assessJurisdiction: not on file is never none', () => {
 });
 
 describe('assessJurisdiction: values on file', () => {
+  it('no overall length limit (a sourced null): a stretched semitrailer over the state’s semitrailer limit needs a permit', () => {
+    const rule = fixtureRule('VA', 'Virginia', { legal: { ...federalLegal(), overallLengthIn: known<number | null>(null), semitrailerLengthIn: known<number | null>(53 * FT) } });
+    const at = (trailerLengthIn: number) => assessJurisdiction(rule, { dimensions: { ...load({ lengthIn: 90 * FT }), trailerLengthIn }, miles: 10, roadTypes: ['interstate'] });
+    expect(at(53 * FT).permitRequired).toBe(false);
+    const long = at(53 * FT + 1);
+    expect(long.permitRequired).toBe(true);
+    expect(long.permitReasons[0]).toMatchObject({ code: 'over-legal-length', value: 53 * FT + 1, limit: 53 * FT });
+  });
+
   it('11 ft wide is over the legal 8\'6" by 2\'6"; the permit reason says which limit and by how much', () => {
     const a = assessJurisdiction(TX_SHAPE, { dimensions: load({ widthIn: 132 }), miles: 100, roadTypes: ['multilane'] });
     expect(a.permitReasons[0]).toMatchObject({ code: 'over-legal-width', value: 132, limit: 102 });

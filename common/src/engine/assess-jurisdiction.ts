@@ -27,7 +27,13 @@ import { formatFeetInches, formatPounds } from './units';
 import { ABSURD, checkNumber } from './validate';
 
 export type AssessmentInput = {
-  dimensions: MeasuredLoad & { rearProjectionWidthIn?: number; sideProjectionLeftIn?: number; sideProjectionRightIn?: number };
+  dimensions: MeasuredLoad & {
+    rearProjectionWidthIn?: number;
+    sideProjectionLeftIn?: number;
+    sideProjectionRightIn?: number;
+    /** The semitrailer's own length (an extended stretch deck), checked against the state's semitrailer limit. */
+    trailerLengthIn?: number;
+  };
   /** Axles front to rear (positions from the steer axle); omit to check the gross only. */
   axles?: AxleInput[];
   /** Miles in this jurisdiction. */
@@ -115,7 +121,7 @@ const LOWEST_STATE_HEIGHT_IN = 162;
 type LegalCheck = { over: Reason[]; unknown: OpenQuestion[]; oversizeMeasures: Set<Measure> };
 
 /** Dimensions of the load over the jurisdiction's legal limits, and the limits not on file that the load may exceed. */
-export function legalDimensionCheck(rule: JurisdictionRule, m: MeasuredLoad): LegalCheck {
+export function legalDimensionCheck(rule: JurisdictionRule, m: MeasuredLoad, trailerLengthIn?: number): LegalCheck {
   const L = rule.legal;
   const over: Reason[] = [];
   const unknown: OpenQuestion[] = [];
@@ -151,6 +157,18 @@ export function legalDimensionCheck(rule: JurisdictionRule, m: MeasuredLoad): Le
   }
   check('height', m.heightIn, L.heightIn, 'legal.heightIn', m.heightIn > LOWEST_STATE_HEIGHT_IN);
   check('length', m.lengthIn, L.overallLengthIn, 'legal.overallLengthIn', true);
+  // where the state limits the semitrailer rather than the combination, a stretched deck is what makes it long
+  const semi = L.semitrailerLengthIn;
+  if (trailerLengthIn !== undefined && isKnown(semi) && semi.value !== null && trailerLengthIn > semi.value + 1e-9 && !oversizeMeasures.has('length')) {
+    oversizeMeasures.add('length');
+    over.push(
+      reasonFrom('over-legal-length', `semitrailer ${formatFeetInches(trailerLengthIn)} is over the legal semitrailer length ${formatFeetInches(semi.value)} by ${formatFeetInches(trailerLengthIn - semi.value)}`, semi, {
+        value: trailerLengthIn,
+        limit: semi.value,
+        unit: 'in',
+      }),
+    );
+  }
   check('frontOverhang', m.frontOverhangIn, L.frontOverhangIn, 'legal.frontOverhangIn', m.frontOverhangIn > 0);
   check('rearOverhang', m.rearOverhangIn, L.rearOverhangIn, 'legal.rearOverhangIn', m.rearOverhangIn > 0);
   return { over, unknown, oversizeMeasures };
@@ -265,7 +283,8 @@ export function assessJurisdiction(rule: JurisdictionRule, input: AssessmentInpu
     openQuestions.push({ jurisdiction: rule.code, topic, message: `${rule.name}: ${what} ${NOT_ON_FILE}` });
   };
 
-  const legalCheck = legalDimensionCheck(rule, m);
+  const trailerLengthIn = d.trailerLengthIn === undefined ? undefined : checkNumber('dimensions.trailerLengthIn', d.trailerLengthIn, { min: 0, max: ABSURD.lengthIn, unit: 'in' });
+  const legalCheck = legalDimensionCheck(rule, m, trailerLengthIn);
   const permitReasons: Reason[] = [...legalCheck.over];
 
   // Weights: each of the state's own limits where on file; the federal Interstate limit for any not on file, said so.

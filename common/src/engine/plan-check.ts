@@ -181,6 +181,7 @@ export function planCheck(plan: PlanInput): PlanCheckResult {
     sideProjectionLeftIn: dimensions.sideProjectionLeftIn,
     sideProjectionRightIn: dimensions.sideProjectionRightIn,
     rearProjectionWidthIn: dimensions.rearProjectionWidthIn,
+    trailerLengthIn: trailer.lengthIn,
     grossLb: axleLoads.grossLb,
   };
   const markings = projectingLoadMarkings({
