@@ -21,7 +21,13 @@ function JurisdictionBody({ j }: { j: JurisdictionPlanResult }) {
       </div>
       <div style={{ fontSize: 12, color: '#475569' }} data-testid="permit-validity">
         Valid {j.permit.validityDays !== null ? `${j.permit.validityDays} days` : <NotOnFile>validity not on file</NotOnFile>}; apply{' '}
-        {j.permit.leadTimeDays !== null ? `${j.permit.leadTimeDays} days ahead` : <NotOnFile>lead time not on file</NotOnFile>} · <CitedSource text={j.permit.source} />
+        {j.permit.leadTimeDays !== null ? `${j.permit.leadTimeDays} days ahead` : <NotOnFile>lead time not on file</NotOnFile>}
+        {(j.permit.validityDays !== null || j.permit.leadTimeDays !== null) && (
+          <>
+            {' · '}
+            <CitedSource text={j.permit.source} />
+          </>
+        )}
       </div>
       <OpenQuestions questions={j.openQuestions} />
 
