@@ -50,7 +50,7 @@ describe('a topic not on file reads as such, never as none', () => {
     );
     expect(created.status).toBe(201);
     move = created.body;
-  });
+  }, 120_000);
   afterAll(() => browser?.close());
 
   it('the move page shows escorts and the fee for GA as not on file, and lists them among the open questions', async () => {
@@ -73,7 +73,7 @@ describe('a topic not on file reads as such, never as none', () => {
     expect(style).toBe('dashed');
     await screenshot(page, 'not-on-file-1-move-page');
     await page.close();
-  });
+  }, 120_000);
 
   it('the driver’s run sheet says escorts are not on file for GA and lists the open questions', async () => {
     const page = await browser.newPage({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
@@ -87,5 +87,5 @@ describe('a topic not on file reads as such, never as none', () => {
     expect(await page.getByTestId('travel-GA').textContent()).toMatch(/not on file — check the permit/);
     await screenshot(page, 'not-on-file-2-run-sheet-phone');
     await page.close();
-  });
+  }, 120_000);
 });
