@@ -104,6 +104,8 @@ describe('escort booking in the browser', () => {
     await vp.getByLabel('Operator').fill('Rosalind Quade');
     await vp.getByLabel('Vehicle').fill('White pickup with pole, PLT-0001');
     await vp.getByLabel('Phone on the road').fill('+1 512 555 0142');
+    // a typed certificate number goes as one certificate for its state, not one a character
+    await vp.getByLabel('TX certificate number').fill('TX-EC 40417');
     await screenshot(vp, 'escorts-4-vendor-page-phone');
     await vp.getByTestId('send-answer').click();
     await vp.getByTestId('answer-result').waitFor();
@@ -113,6 +115,7 @@ describe('escort booking in the browser', () => {
     // the dispatcher's page picks the answer up by itself
     await section.getByTestId('coverage-TX-confirmed').waitFor({ timeout: 15_000 });
     await section.getByTestId('answer-operator').filter({ hasText: 'Rosalind Quade' }).waitFor();
+    expect(await section.textContent()).toContain('Certificates: TX TX-EC 40417');
     await screenshot(desk, 'escorts-6-dispatcher-sees-confirmation');
 
     // the link has done its one job; an altered one reveals nothing

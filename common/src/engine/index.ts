@@ -14,6 +14,8 @@ export * from './sun-times';
 export * from './holidays';
 export * from './time-zone';
 export * from './travel-windows';
+export * from './travel-describe';
+export * from './permit-terms';
 export * from './air-gauge';
 export * from './permit-fee';
 export * from './assess-jurisdiction';

@@ -10,6 +10,7 @@ import { blankRecord } from '../rulebook/blank-record';
 import { jurisdictionByCode } from '../geo/jurisdictions';
 import { SecurementResult, TiedownSpec, checkSecurement } from './securement';
 import { TravelWindowsResult, travelWindows } from './travel-windows';
+import { PermitGovernance, PermitTerms, governedTravelRules, permitGovernance } from './permit-terms';
 import { ABSURD, checkNumber } from './validate';
 
 export type PlanTractor = TractorAxleGeometry & {
@@ -74,6 +75,8 @@ export type PlanInput = {
   registeredGrossLb?: number;
   /** Issued permits' validity windows by jurisdiction code. */
   permitValidity?: Record<string, { from: string; to: string }>;
+  /** Issued permits' recorded terms by jurisdiction code: they govern travel and escorts there. */
+  permits?: Record<string, PermitTerms>;
 };
 
 export type JurisdictionPlanResult = JurisdictionAssessment & {
@@ -81,6 +84,8 @@ export type JurisdictionPlanResult = JurisdictionAssessment & {
   roadTypes: RoadType[];
   ruleFound: boolean;
   travel: TravelWindowsResult[];
+  /** Set when an issued permit's terms govern this jurisdiction: what it decides and where it differs from the rulebook. */
+  governedBy: PermitGovernance | null;
 };
 
 export type PlanCheckResult = {
@@ -121,6 +126,33 @@ const TRAVEL_TOPIC_LABELS: Record<string, string> = {
   holidays: 'holiday travel limits',
   curfews: 'urban curfews',
 };
+
+/**
+ * The escorts an issued permit asks replace the rulebook's for that jurisdiction (the permit governs); the
+ * rulebook's open question on escorts is answered by it.
+ */
+function escortsFromPermit(a: JurisdictionAssessment, t: PermitTerms): JurisdictionAssessment {
+  const e = t.escorts!;
+  const heightPole = e.heightPole ?? a.escorts.heightPole;
+  return {
+    ...a,
+    escorts: {
+      ...a.escorts,
+      known: true,
+      unknownMeasures: [],
+      front: e.front,
+      rear: e.rear,
+      heightPole,
+      heightPoleSetIn: heightPole ? a.escorts.heightPoleSetIn : null,
+      byRoadType: a.escorts.byRoadType.map((b) => ({ ...b, front: e.front, rear: e.rear, heightPole, known: true })),
+      reasons: [
+        { code: 'permit-escorts', message: `${t.label}: ${e.front} front and ${e.rear} rear escort(s)${heightPole ? ', height pole' : ''}`, source: `${t.label} (issued ${t.issuedOn})` },
+        ...a.escorts.reasons.filter((r) => r.code !== 'escorts-not-on-file'),
+      ],
+    },
+    openQuestions: a.openQuestions.filter((q) => q.topic !== 'escorts'),
+  };
+}
 
 /** Runs the whole plan and returns every result with its reasons (live feedback in the browser, assessment on the server). */
 export function planCheck(plan: PlanInput): PlanCheckResult {
@@ -215,13 +247,16 @@ export function planCheck(plan: PlanInput): PlanCheckResult {
     if (!found) problems.push(`${code}: no rulebook record; every topic not on file`);
     const miles = segs.reduce((s, x) => s + x.miles, 0);
     const roadTypes = [...new Set(segs.map((s) => s.roadType))];
-    const assessment = assessJurisdiction(rule, {
+    const assessed = assessJurisdiction(rule, {
       dimensions: measured,
       axles,
       miles,
       roadTypes,
       ...(plan.registeredGrossLb !== undefined ? { registeredGrossLb: plan.registeredGrossLb } : {}),
     });
+    const terms = plan.permits?.[code];
+    const governance = terms ? permitGovernance(rule.travel, terms, assessed.escorts) : null;
+    const assessment = terms?.escorts ? escortsFromPermit(assessed, terms) : assessed;
     const overLegal = assessment.permitReasons.filter((r) => r.code.startsWith('over-legal-')).map((r) => r.code);
     const load = {
       overweightOnly: assessment.overweight && !assessment.oversize,
@@ -235,16 +270,18 @@ export function planCheck(plan: PlanInput): PlanCheckResult {
     const first = segs[0];
     const urban = segs.some((s) => s.urban === true);
     const validity = plan.permitValidity?.[code];
+    const governed = terms ? governedTravelRules(rule.travel, terms) : null;
     const travel = plan.travelDates.map((date) =>
       travelWindows({
         date,
         lat: first.lat,
         lon: first.lon,
         timeZone: first.timeZone,
-        rule,
+        rule: governed ? { ...rule, travel: governed.rules } : rule,
         urban,
         load,
         ...(validity ? { permitValidity: validity } : {}),
+        ...(governed?.clockHours ? { clockHours: governed.clockHours } : {}),
       }),
     );
     if (plan.travelDates.length > 0 && travel.every((t) => !t.allowed)) problems.push(`${code}: no legal travel window on the planned dates`);
@@ -255,7 +292,7 @@ export function planCheck(plan: PlanInput): PlanCheckResult {
         ? travelUnknown.map((topic) => ({ jurisdiction: code, topic: `travel.${topic}`, message: `${rule.name}: ${TRAVEL_TOPIC_LABELS[topic] ?? topic} not on file — check the permit` }))
         : []),
     ];
-    jurisdictions.push({ ...assessment, openQuestions, miles, roadTypes, ruleFound: found !== undefined, travel });
+    jurisdictions.push({ ...assessment, openQuestions, miles, roadTypes, ruleFound: found !== undefined, travel, governedBy: governance });
   }
 
   for (const v of federal.violations) problems.push(`federal limit: ${v.message}`);

@@ -34,6 +34,8 @@ export type TravelWindowsInput = {
   load?: TravelLoadFacts;
   /** The permit's validity window (inclusive dates). */
   permitValidity?: { from: string; to: string };
+  /** Fixed local travel hours an issued permit sets (`HH:MM`, end after start), with the permit as source. */
+  clockHours?: { start: string; end: string; source: string };
 };
 
 export type TravelInterval = {
@@ -145,6 +147,14 @@ export function travelWindows(input: TravelWindowsInput): TravelWindowsResult {
     restrictions.push({ code: 'daylight', message: msg, source: cite(daylight) });
   } else if (daylight.value) {
     reasons.push({ code: 'night-allowed', message: `${who}: this load is under the daylight-only dimensions; travel at any hour`, source: cite(daylight) });
+  }
+
+  if (input.clockHours) {
+    const a = parseClock('clockHours.start', input.clockHours.start);
+    const b = parseClock('clockHours.end', input.clockHours.end);
+    if (b <= a) throw new RangeError('clockHours.end must be after clockHours.start');
+    spans = subtract(subtract(spans, [dayStart, at(day, a)]), [b >= 24 * 60 ? dayEnd : at(day, b), dayEnd]);
+    restrictions.push({ code: 'permit-hours', message: `${who}: travel ${input.clockHours.start}–${input.clockHours.end} local time only`, source: input.clockHours.source });
   }
 
   const weekends = travel.weekends;

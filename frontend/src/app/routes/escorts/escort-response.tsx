@@ -157,6 +157,13 @@ type AnswerValues = {
   note?: string;
 };
 
+/** The certificate numbers typed per state, one entry a state with a number (blank fields left out). */
+function certificationsOf(certs: Record<string, string | undefined> | undefined): { state: string; number: string }[] {
+  return Object.entries(certs ?? {})
+    .filter(([, n]) => typeof n === 'string' && n.trim() !== '')
+    .map(([state, n]) => ({ state, number: n!.trim() }));
+}
+
 function AnswerForm({ r, token, onDone, onGone }: { r: EscortRequestView; token: string; onDone: (a: EscortAnswerResult) => void; onGone: (p: ReturnType<typeof linkProblem>) => void }) {
   const { message } = App.useApp();
   const [form] = Form.useForm<AnswerValues>();
@@ -181,9 +188,7 @@ function AnswerForm({ r, token, onDone, onGone }: { r: EscortRequestView; token:
             operatorName: v.operatorName,
             vehicle: v.vehicle,
             phone: v.phone,
-            certifications: Object.entries(v.certs ?? {})
-              .filter(([, n]) => n?.trim())
-              .map(([state, n]) => ({ state, number: n!.trim() })),
+            certifications: certificationsOf(v.certs),
             ...(v.note ? { note: v.note } : {}),
           }
         : v.decision === 'decline'
@@ -196,7 +201,11 @@ function AnswerForm({ r, token, onDone, onGone }: { r: EscortRequestView; token:
         onError: (e) => {
           const p = linkProblem(e);
           if (p) return onGone(p);
-          const rest = applyApiFieldErrors(form, e, (f) => (f.startsWith('certifications') ? ['certs'] : [f]));
+          const sent = body.decision === 'confirm' ? (body.certifications ?? []) : [];
+          const rest = applyApiFieldErrors(form, e, (f) => {
+            const at = /^certifications\.(\d+)/.exec(f);
+            return at && sent[Number(at[1])] ? ['certs', sent[Number(at[1])].state] : [f];
+          });
           if (rest === null) message.error(e.message);
           else setUnplaced(rest);
         },
@@ -229,7 +238,8 @@ function AnswerForm({ r, token, onDone, onGone }: { r: EscortRequestView; token:
             <Form.Item name="phone" label="Phone on the road" rules={[{ required: true, message: 'Give a phone number' }, { pattern: /^[0-9+()\-. ]{7,40}$/, message: '7–40 digits, spaces, + ( ) - .' }]}>
               <Input inputMode="tel" />
             </Form.Item>
-            <Form.Item name="certs" label="Certificate numbers" extra={r.certificationStates.length ? `Asked for in ${r.certificationStates.map(stateName).join(', ')} (sample data).` : 'None of these states is on our list of states that ask for one.'}>
+            {/* no name here: a named item would take the inputs' bubbled change events as its own value */}
+            <Form.Item label="Certificate numbers" extra={r.certificationStates.length ? `Asked for in ${r.certificationStates.map(stateName).join(', ')} (sample data).` : 'None of these states is on our list of states that ask for one.'}>
               <div style={{ display: 'grid', gap: 8 }}>
                 {r.jurisdictions.map((c) => (
                   <Space.Compact key={c} style={{ width: '100%' }}>

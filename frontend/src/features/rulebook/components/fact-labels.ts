@@ -1,5 +1,8 @@
 /** Labels and plain-language values for the facts of a rule record, shared by the view, the editor and the diff. */
-import { HOLIDAY_NAMES, MEASURE_LABELS, formatFeetInches, formatPounds, formatUsd, type HolidayName, type Trigger } from '@amberline/common';
+import {
+  MEASURE_LABELS, describeDaylight, describeHolidays, describeWeekends, formatFeetInches, formatPounds, formatUsd,
+  type HolidayRule, type Trigger, type WeekendRule,
+} from '@amberline/common';
 
 export const FACT_LABELS: Record<string, string> = {
   'legal.widthIn': 'Legal width',
@@ -40,8 +43,6 @@ export const FACT_LABELS: Record<string, string> = {
   speed: 'Speed',
 };
 
-const DAYS = ['Sun', 'Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat'];
-const off = (m: number, what: string) => (m === 0 ? what : `${Math.abs(m)} min ${m < 0 ? 'before' : 'after'} ${what}`);
 
 /** A number named by its key's unit suffix (…In, …Lb, …Usd, …Min). */
 function withUnit(key: string, v: number): string {
@@ -94,17 +95,10 @@ export function describeValue(path: string, value: unknown): string {
   }
   if (path === 'travel.daylight' && typeof value === 'object') {
     const d = value as { startOffsetMin: number; endOffsetMin: number; appliesAbove?: Record<string, number> };
-    return `${off(d.startOffsetMin, 'sunrise')} to ${off(d.endOffsetMin, 'sunset')}${d.appliesAbove ? ` for loads over ${JSON.stringify(d.appliesAbove)}` : ''}`;
+    return `${describeDaylight(d)}${d.appliesAbove ? ` for loads over ${flat(d.appliesAbove)}` : ''}`;
   }
-  if (path === 'travel.weekends' && typeof value === 'object') {
-    const w = value as { bans: { day: number; from?: string; to?: string }[] };
-    return w.bans.length === 0 ? 'weekend travel allowed' : `no travel: ${w.bans.map((b) => `${DAYS[b.day]}${b.from || b.to ? ` ${b.from ?? '00:00'}–${b.to ?? '24:00'}` : ''}`).join(', ')}`;
-  }
-  if (path === 'travel.holidays' && typeof value === 'object') {
-    const h = value as { names: string[]; from: string; observance: string };
-    const from = { 'noon-weekday-before': 'from noon of the weekday before', 'noon-day-before': 'from noon of the day before', 'day-only': 'the day itself' }[h.from] ?? h.from;
-    return h.names.length === 0 ? 'no holiday limit' : `${h.names.map((n) => HOLIDAY_NAMES[n as HolidayName] ?? n).join(', ')}; ${from}; ${h.observance === 'both' ? 'calendar and observed dates' : `${h.observance} date`}`;
-  }
+  if (path === 'travel.weekends' && typeof value === 'object') return describeWeekends(value as WeekendRule);
+  if (path === 'travel.holidays' && typeof value === 'object') return describeHolidays(value as HolidayRule);
   if (path === 'travel.curfews' && Array.isArray(value)) {
     return value.length === 0 ? 'no curfews' : value.map((c: { area: string; start: string; end: string }) => `${c.area} ${c.start}–${c.end}`).join('; ');
   }
