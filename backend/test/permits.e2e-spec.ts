@@ -179,7 +179,7 @@ describe('/api/permits', () => {
     expect(res.status).toBe(200);
     const after: PermitDto = (await t.http().get(`/api/permits/${p.id}`).set(as('permit_clerk'))).body;
     expect(after.status).toBe('needs_amendment');
-    expect(after.amendmentReason).toMatch(/validity no longer covers the travel days/);
+    expect(after.amendmentReason).toMatch(/validity no longer covers the planned travel: travel (window|day) \d{4}-\d\d-\d\d .*lies outside the permit's validity/);
   });
 
   it('the guard lists what is missing, permit by permit, and refuses a validity that misses a travel day', async () => {
@@ -201,7 +201,7 @@ describe('/api/permits', () => {
     const of = (j: string) => unmet.filter((u) => u.jurisdiction === j).map((u) => u.code).sort();
     expect(of('TX')).toEqual(['permit_pdf_missing', 'permit_unpaid', 'permit_validity']);
     expect(of('NM')).toEqual(['permit_not_issued', 'permit_pdf_missing', 'permit_unpaid']);
-    expect(unmet.find((u) => u.code === 'permit_validity')!.message).toMatch(/^TX permit: valid .* does not cover the travel days/);
+    expect(unmet.find((u) => u.code === 'permit_validity')!.message).toMatch(new RegExp(`^TX permit: valid ${daysFromNow(10)} 00:00 C[SD]T to ${daysFromNow(10)} 23:59 C[SD]T: travel (window|day) ${daysFromNow(11)} .*lies outside the permit's validity`));
     expect(res.body.message).toMatch(/NM permit: is to file, not issued/);
     expect(nm.status).toBe('to_file');
     expect((await t.http().get(`/api/moves/${move.id}`).set(as('dispatcher'))).body.stage).toBe('requested');

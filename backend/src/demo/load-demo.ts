@@ -91,7 +91,13 @@ export async function loadDemo(now = new Date()): Promise<string> {
       }
       if (stage !== 'requested') {
         await ds.transaction(async (m) => {
-          await m.query(`UPDATE moves SET stage = $2, version = version + 1 WHERE id = $1`, [move.id, stage]);
+          // past requested, a move keeps the rule versions it was assessed with
+          await m.query(
+            `UPDATE moves SET stage = $2, version = version + 1, stage_changed_at = now(),
+                    rule_versions = (SELECT jsonb_object_agg(j.code, j.current_version) FROM jurisdictions j WHERE j.code = ANY(moves.jurisdictions))
+              WHERE id = $1`,
+            [move.id, stage],
+          );
           await audit.record(m, {
             moveId: move.id, entity: 'move', entityId: move.id, action: 'stage', actorId: dispatcher.id,
             before: { stage: 'requested' }, after: { stage },

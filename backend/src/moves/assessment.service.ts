@@ -3,7 +3,7 @@ import { Injectable } from '@nestjs/common';
 import { LRUCache } from 'lru-cache';
 import {
   defaultWll, PLANNING_CAUTION, planCheck, ANCHOR_KIND_LABELS,
-  type AssessmentDto, type MoveArticle, type PlanArticle, type PlanCheckResult, type PlanInput, type RouteSegmentDto, type TiedownSpec,
+  type AssessmentDto, type MoveArticle, type PermitTerms, type PlanArticle, type PlanCheckResult, type PlanInput, type RouteSegmentDto, type TiedownSpec,
 } from '@amberline/common';
 import { fieldError } from '../core/app-exception';
 import type { Tractor } from '../fleet/entities/tractor.entity';
@@ -66,10 +66,18 @@ export class AssessmentService {
 
   constructor(private readonly rulebook: RulebookService) {}
 
-  async assess(facts: PlanFacts): Promise<{ result: PlanCheckResult; ruleVersions: Record<string, number> }> {
+  /**
+   * `pinned`: the rule versions a move past `requested` keeps (codes not in it use the current version);
+   * `permits`: issued permits' recorded terms, which govern travel and escorts in their state.
+   */
+  async assess(
+    facts: PlanFacts,
+    opts: { pinned?: Record<string, number> | null; permits?: Record<string, PermitTerms> } = {},
+  ): Promise<{ result: PlanCheckResult; ruleVersions: Record<string, number> }> {
     const codes = [...new Set(facts.route.map((s) => s.jurisdiction))];
-    const rules = await this.rulebook.currentRules(codes);
+    const rules = await this.rulebook.rulesFor(codes, opts.pinned ?? null);
     const plan = this.toPlanInput(facts, [...rules.values()].map((r) => r.record));
+    if (opts.permits && Object.keys(opts.permits).length) plan.permits = opts.permits;
     // rule records are immutable per version row, so their ids stand for them in the key
     const key = createHash('sha256').update(JSON.stringify({ ...plan, rules: [...rules.values()].map((r) => r.id) })).digest('base64');
     let result = this.results.get(key);
@@ -124,7 +132,7 @@ export class AssessmentService {
   }
 
   toDto(moveId: string, moveVersion: number, a: { result: PlanCheckResult; ruleVersions: Record<string, number> }, now: Date): AssessmentDto {
-    return { moveId, moveVersion, computedAt: now.toISOString(), ruleVersions: a.ruleVersions, result: a.result, caution: PLANNING_CAUTION };
+    return { moveId, moveVersion, computedAt: now.toISOString(), ruleVersions: a.ruleVersions, pinned: false, newerRules: [], result: a.result, caution: PLANNING_CAUTION };
   }
 }
 

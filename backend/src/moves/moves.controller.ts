@@ -1,9 +1,9 @@
 import { Body, Controller, Get, Param, ParseUUIDPipe, Patch, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import type { AssessmentDto, HistoryEntryDto, MoveDto, MovesPage, SessionUser, StageCounts } from '@amberline/common';
+import type { AssessmentDto, HistoryEntryDto, MoveDto, MovesPage, ReassessmentPreview, SessionUser, StageCounts } from '@amberline/common';
 import { CurrentUser } from '../core/decorators/current-user.decorator';
 import { Roles } from '../core/decorators/roles.decorator';
-import { CreateMoveDto, ListMovesQuery, PreviewDto, StageChangeDto, UpdateMoveDto } from './dto/move.dto';
+import { CreateMoveDto, ListMovesQuery, PreviewDto, ReassessDto, ReopenDto, StageChangeDto, UpdateMoveDto } from './dto/move.dto';
 import { MovesService, toMoveDto } from './moves.service';
 import { WorkflowService } from './workflow.service';
 
@@ -62,6 +62,24 @@ export class MovesController {
   @Roles('admin', 'dispatcher')
   stage(@Param('id', new ParseUUIDPipe()) id: string, @Body() dto: StageChangeDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
     return this.workflow.transition(id, dto, user, new Date());
+  }
+
+  @Post(':id/reopen')
+  @Roles('admin', 'dispatcher')
+  reopen(@Param('id', new ParseUUIDPipe()) id: string, @Body() dto: ReopenDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
+    return this.workflow.reopen(id, dto, user, new Date());
+  }
+
+  @Get(':id/reassessment')
+  @Roles('admin', 'dispatcher', 'permit_clerk')
+  reassessment(@Param('id', new ParseUUIDPipe()) id: string, @CurrentUser() user: SessionUser): Promise<ReassessmentPreview> {
+    return this.workflow.reassessmentPreview(id, user, new Date());
+  }
+
+  @Post(':id/reassess')
+  @Roles('admin', 'dispatcher')
+  reassess(@Param('id', new ParseUUIDPipe()) id: string, @Body() dto: ReassessDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
+    return this.workflow.reassess(id, dto, user, new Date());
   }
 
   @Get(':id/history')

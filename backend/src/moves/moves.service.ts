@@ -1,7 +1,8 @@
 import { Injectable } from '@nestjs/common';
 import { DataSource, EntityManager } from 'typeorm';
 import {
-  MOVE_STAGES, type AssessmentDto, type HistoryEntryDto, type MoveDto, type MoveStage, type MoveSummaryDto, type MovesPage, type SessionUser, type StageCounts,
+  MOVE_STAGES, type AssessmentDto, type HistoryEntryDto, type MoveDto, type MoveStage, type MoveSummaryDto, type MovesPage, type PermitTerms,
+  type SessionUser, type StageCounts,
 } from '@amberline/common';
 import { AuditService, diff } from '../audit/audit.service';
 import { entityColumns, entityFromRow, preparedQuery } from '../database/prepared';
@@ -12,6 +13,7 @@ import { User } from '../users/entities/user.entity';
 import { AssessmentService, summarize, travelDates } from './assessment.service';
 import { CreateMoveDto, ListMovesQuery, UpdateMoveDto } from './dto/move.dto';
 import { Move } from './entities/move.entity';
+import { RulebookService } from '../rulebook/rulebook.service';
 import { MoveExtensionsRegistry } from './move-extensions';
 import { resolveRoute } from './route-geo';
 
@@ -42,6 +44,7 @@ export function toMoveDto(m: Move): MoveDto {
     tractor: { id: m.tractorId, unitNumber: m.tractor?.unitNumber ?? '' },
     trailer: { id: m.trailerId, unitNumber: m.trailer?.unitNumber ?? '', type: m.trailer?.type ?? '' },
     driver: m.driver ? { id: m.driver.id, name: m.driver.name } : null,
+    stageChangedAt: m.stageChangedAt ? m.stageChangedAt.toISOString() : null,
     createdAt: m.createdAt.toISOString(),
     updatedAt: m.updatedAt.toISOString(),
   };
@@ -66,6 +69,7 @@ export class MovesService {
     private readonly audit: AuditService,
     private readonly assessments: AssessmentService,
     private readonly extensions: MoveExtensionsRegistry,
+    private readonly rulebook: RulebookService,
   ) {}
 
   /** Loads a move with its equipment and driver. Drivers may only see moves assigned to them. */
@@ -191,9 +195,11 @@ export class MovesService {
       this.checkPlanFields({ ...changes, sliderSettingFt: after.sliderSettingFt }, trailer, now, changes.requestedDeparture !== undefined && changes.requestedDeparture !== before.requestedDeparture);
       const changedPlan = PLAN_FIELDS.filter((f) => JSON.stringify(before[f]) !== JSON.stringify(after[f]));
       if (changedPlan.length) {
-        const a = await this.assessments.assess({ ...after, tractor, trailer });
+        const a = await this.assessments.assess({ ...after, tractor, trailer }, { pinned: before.ruleVersions });
         after.summary = summarize(a.result);
         after.planRevision = before.planRevision + 1;
+        // a state new on the route of a move that keeps its rule versions is kept at its current version from now on
+        if (before.ruleVersions) after.ruleVersions = a.ruleVersions;
       }
       const d = diff(auditView(before), auditView(after));
       if (!Object.keys(d.after).length) return;
@@ -206,7 +212,7 @@ export class MovesService {
           customer: after.customer, customerRef: after.customerRef, commodity: after.commodity, tractorId: after.tractorId, trailerId: after.trailerId,
           driverId: after.driverId, sliderSettingFt: after.sliderSettingFt, articles: after.articles, route: after.route, jurisdictions: after.jurisdictions,
           origin: after.origin, destination: after.destination, requestedDeparture: after.requestedDeparture, travelDays: after.travelDays,
-          notes: after.notes, summary: after.summary, planRevision: after.planRevision, version: after.version,
+          notes: after.notes, summary: after.summary, planRevision: after.planRevision, version: after.version, ruleVersions: after.ruleVersions,
         })
         .where('id = :id AND version = :v', { id, v: before.version })
         .execute();
@@ -275,11 +281,27 @@ export class MovesService {
     return this.assessmentOf(move, now);
   }
 
-  async assessmentOf(move: Move, now: Date, manager?: EntityManager): Promise<AssessmentDto> {
-    const tractor = move.tractor ?? (await (manager ?? this.ds.manager).findOneByOrFail(Tractor, { id: move.tractorId }));
-    const trailer = move.trailer ?? (await (manager ?? this.ds.manager).findOneByOrFail(Trailer, { id: move.trailerId }));
-    const a = await this.assessments.assess({ ...move, tractor, trailer });
-    return this.assessments.toDto(move.id, move.version, a, now);
+  /**
+   * The move's assessment: with the rule versions it keeps once past `requested` (`rules: 'current'` asks for
+   * the current ones, for the re-assessment preview), and with its issued permits' terms governing their states.
+   */
+  async assessmentOf(move: Move, now: Date, manager?: EntityManager, opts: { rules?: 'kept' | 'current' } = {}): Promise<AssessmentDto> {
+    const m = manager ?? this.ds.manager;
+    const tractor = move.tractor ?? (await m.findOneByOrFail(Tractor, { id: move.tractorId }));
+    const trailer = move.trailer ?? (await m.findOneByOrFail(Trailer, { id: move.trailerId }));
+    const permits: Record<string, PermitTerms> = {};
+    for (const ext of this.extensions.all()) if (ext.permitTerms) Object.assign(permits, await ext.permitTerms(move, m));
+    const pinned = opts.rules === 'current' ? null : move.ruleVersions;
+    const a = await this.assessments.assess({ ...move, tractor, trailer }, { pinned, permits });
+    const dto = this.assessments.toDto(move.id, move.version, a, now);
+    if (pinned) {
+      const current = await this.rulebook.currentVersions(Object.keys(a.ruleVersions));
+      dto.pinned = true;
+      dto.newerRules = Object.entries(a.ruleVersions)
+        .filter(([code, v]) => (current[code] ?? v) > v)
+        .map(([code, v]) => ({ code, used: v, current: current[code] }));
+    }
+    return dto;
   }
 
   async history(id: string, viewer: SessionUser): Promise<HistoryEntryDto[]> {

@@ -1,25 +1,44 @@
 import { Injectable } from '@nestjs/common';
-import { DataSource } from 'typeorm';
-import { canTransition, MOVE_STAGE_LABELS, type MoveDto, type SessionUser, type UnmetCondition } from '@amberline/common';
+import { DataSource, EntityManager } from 'typeorm';
+import {
+  assessmentDifferences, canTransition, formatZoned, MOVE_STAGE_LABELS, REOPEN_DELIVERED_DAYS, zonedTimeToUtc,
+  type MoveDto, type MoveStage, type ReassessmentPreview, type SessionUser, type UnmetCondition,
+} from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
 import { AppException, fieldError } from '../core/app-exception';
-import { StageChangeDto } from './dto/move.dto';
+import { ReassessDto, ReopenDto, StageChangeDto } from './dto/move.dto';
+import { summarize } from './assessment.service';
 import { Move } from './entities/move.entity';
 import { MoveExtensionsRegistry, type TransitionContext } from './move-extensions';
 import { MovesService, toMoveDto } from './moves.service';
 
-/** The conditions the moves module itself checks; permits, escorts and run sheets add theirs as extensions. */
-export function baseConditions(ctx: Pick<TransitionContext, 'move' | 'to' | 'assessment'>): UnmetCondition[] {
+/**
+ * The conditions the moves module itself checks; permits, escorts and run sheets add theirs as extensions. A move
+ * runs only from its earliest legal departure on (the first legal travel window in the first state; the departure
+ * date's local midnight there when no window is known).
+ */
+export function baseConditions(ctx: Pick<TransitionContext, 'move' | 'to' | 'assessment'>, now: Date): UnmetCondition[] {
   const out: UnmetCondition[] = [];
   const r = ctx.assessment.result;
   if (ctx.to === 'running') {
     if (!ctx.move.driverId) out.push({ code: 'driver_missing', message: 'assign a driver before the move runs' });
+    const first = ctx.move.route[0];
+    const tz = first?.timeZone ?? 'America/Chicago';
+    const earliest = r.summary.earliestDeparture ? Date.parse(r.summary.earliestDeparture) : zonedMidnight(ctx.move.requestedDeparture, tz);
+    if (now.getTime() < earliest) {
+      out.push({
+        code: 'before_earliest_departure',
+        message: `the move cannot run before its earliest legal departure, ${formatZoned(earliest, tz)}${r.summary.earliestDepartureKnown ? '' : ' (travel rules of the first state not on file: the departure date)'}`,
+      });
+    }
     for (const s of r.securement) {
       if (!s.ok) out.push({ code: 'securement_short', message: `securement of ${s.articleId} falls short: ${s.findings.join('; ')}` });
     }
   }
   return out;
 }
+
+const zonedMidnight = (date: string, tz: string): number => zonedTimeToUtc(Date.parse(`${date}T00:00:00Z`) / 86_400_000, 0, tz);
 
 @Injectable()
 export class WorkflowService {
@@ -46,7 +65,7 @@ export class WorkflowService {
       }
       const assessment = await this.moves.assessmentOf(move, now, manager);
       const ctx: TransitionContext = { manager, move, to: dto.to, assessment, actor };
-      const unmet: UnmetCondition[] = dto.to === 'cancelled' ? [] : [...baseConditions(ctx)];
+      const unmet: UnmetCondition[] = dto.to === 'cancelled' ? [] : [...baseConditions(ctx, now)];
       const notes: string[] = [];
       if (dto.to !== 'cancelled') {
         for (const ext of this.extensions.all()) {
@@ -57,13 +76,89 @@ export class WorkflowService {
         throw new AppException(409, 'conflict', `Cannot move to ${MOVE_STAGE_LABELS[dto.to]}: ${unmet.map((u) => u.message).join('; ')}`, { unmet });
       }
       for (const ext of this.extensions.all()) if (ext.transitionNotes) notes.push(...(await ext.transitionNotes(ctx)));
-      await manager.update(Move, { id }, { stage: dto.to, version: move.version + 1, updatedAt: now });
+      // leaving requested, the assessment keeps the rule versions it used: later rule edits change it only when re-assessed
+      const pin = move.ruleVersions === null ? { ruleVersions: assessment.ruleVersions } : {};
+      await manager.update(Move, { id }, { stage: dto.to, version: move.version + 1, updatedAt: now, stageChangedAt: now, ...pin });
       for (const ext of this.extensions.all()) if (ext.afterTransition) await ext.afterTransition({ ...ctx, from: move.stage });
       await this.audit.record(manager, {
         moveId: id, entity: 'move', entityId: id, action: 'stage', actorId: actor.id,
         before: { stage: move.stage }, after: { stage: dto.to, ruleVersions: assessment.ruleVersions, ...(notes.length ? { notes } : {}) },
         reason: dto.reason ?? null,
       });
+    });
+    return toMoveDto(await this.moves.get(id));
+  }
+
+  /** Locks the move, checks the caller's version, and loads it with its equipment. */
+  private async lockedMove(manager: EntityManager, id: string, version: number): Promise<Move> {
+    const locked = await manager.findOne(Move, { where: { id }, lock: { mode: 'pessimistic_write' } });
+    if (!locked) throw new AppException(404, 'not_found', `No move ${id}`);
+    if (version !== locked.version) throw new AppException(409, 'conflict', `This move was changed by someone else (version ${locked.version}, yours ${version}); reload it`);
+    return this.moves.get(id, undefined, manager);
+  }
+
+  /**
+   * Reopens a cancelled move (back to requested, assessed again with the current rules) or one delivered within
+   * REOPEN_DELIVERED_DAYS (back to running). Always with a reason, in the audit trail.
+   */
+  async reopen(id: string, dto: ReopenDto, actor: SessionUser, now: Date): Promise<MoveDto> {
+    const reason = dto.reason?.trim();
+    if (!reason) throw fieldError('reason', 'say why the move is reopened');
+    await this.ds.transaction(async (manager) => {
+      const move = await this.lockedMove(manager, id, dto.version);
+      let to: MoveStage;
+      if (move.stage === 'cancelled') to = 'requested';
+      else if (move.stage === 'delivered') {
+        const since = move.stageChangedAt ?? move.updatedAt;
+        const days = (now.getTime() - since.getTime()) / 86_400_000;
+        if (days > REOPEN_DELIVERED_DAYS) {
+          throw new AppException(409, 'conflict', `A move delivered more than ${REOPEN_DELIVERED_DAYS} days ago cannot be reopened (delivered ${since.toISOString().slice(0, 10)})`);
+        }
+        to = 'running';
+      } else throw new AppException(409, 'conflict', `Only cancelled moves, or moves delivered within ${REOPEN_DELIVERED_DAYS} days, can be reopened; this one is ${MOVE_STAGE_LABELS[move.stage].toLowerCase()}`);
+      const back = to === 'requested' ? { ruleVersions: null } : {};
+      await manager.update(Move, { id }, { stage: to, version: move.version + 1, updatedAt: now, stageChangedAt: now, ...back });
+      await this.audit.record(manager, {
+        moveId: id, entity: 'move', entityId: id, action: 'reopened', actorId: actor.id, before: { stage: move.stage }, after: { stage: to }, reason,
+      });
+    });
+    return toMoveDto(await this.moves.get(id));
+  }
+
+  /** What re-assessing with the current rules would change (nothing is written). */
+  async reassessmentPreview(id: string, viewer: SessionUser, now: Date): Promise<ReassessmentPreview> {
+    const move = await this.moves.get(id, viewer);
+    const kept = await this.moves.assessmentOf(move, now);
+    const current = await this.moves.assessmentOf(move, now, undefined, { rules: 'current' });
+    return {
+      moveId: id,
+      moveVersion: move.version,
+      used: kept.ruleVersions,
+      current: current.ruleVersions,
+      differences: assessmentDifferences(kept.result, current.result),
+      allowed: move.stage !== 'delivered' && move.stage !== 'cancelled' && move.ruleVersions !== null,
+    };
+  }
+
+  /**
+   * Moves a kept assessment to the current rule versions: never for delivered or cancelled moves. Audited with the
+   * versions before and after and the differences; permits and the run sheet follow as after a plan change.
+   */
+  async reassess(id: string, dto: ReassessDto, actor: SessionUser, now: Date): Promise<MoveDto> {
+    await this.ds.transaction(async (manager) => {
+      const move = await this.lockedMove(manager, id, dto.version);
+      if (move.stage === 'delivered' || move.stage === 'cancelled') throw new AppException(409, 'conflict', `A ${MOVE_STAGE_LABELS[move.stage].toLowerCase()} move keeps its assessment; it is never re-assessed`);
+      if (!move.ruleVersions) throw new AppException(409, 'conflict', 'A requested move is always assessed with the current rules; nothing to re-assess');
+      const kept = await this.moves.assessmentOf(move, now, manager);
+      const current = await this.moves.assessmentOf(move, now, manager, { rules: 'current' });
+      const differences = assessmentDifferences(kept.result, current.result);
+      await manager.update(Move, { id }, { ruleVersions: current.ruleVersions, summary: summarize(current.result), version: move.version + 1, updatedAt: now });
+      await this.audit.record(manager, {
+        moveId: id, entity: 'move', entityId: id, action: 'reassessed', actorId: actor.id,
+        before: { ruleVersions: kept.ruleVersions }, after: { ruleVersions: current.ruleVersions, differences }, reason: dto.reason?.trim() || null,
+      });
+      const after = await this.moves.get(id, undefined, manager);
+      for (const ext of this.extensions.all()) await ext.onPlanChanged?.({ manager, before: move, after, changed: ['rule versions'], actor });
     });
     return toMoveDto(await this.moves.get(id));
   }

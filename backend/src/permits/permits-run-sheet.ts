@@ -1,6 +1,6 @@
 import { Injectable, OnModuleInit } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
-import { PERMIT_STATUS_LABELS, type RunSheetPermit } from '@amberline/common';
+import { describeDaylight, describeHolidays, describeWeekends, PERMIT_STATUS_LABELS, type RunSheetPermit } from '@amberline/common';
 import { travelDates } from '../moves/assessment.service';
 import { preparedQuery } from '../database/prepared';
 import type { Move } from '../moves/entities/move.entity';
@@ -14,6 +14,11 @@ function conditionLines(p: Pick<Permit, 'conditions' | 'conditionsText' | 'route
   const out: string[] = [];
   if (c.escortsFront || c.escortsRear) out.push(`escorts: ${c.escortsFront ?? 0} front, ${c.escortsRear ?? 0} rear`);
   if (c.heightPole) out.push('height pole required');
+  const t = c.travel;
+  if (t?.hours) out.push(`travel hours: ${t.hours.kind === 'any' ? 'any hour' : t.hours.kind === 'clock' ? `${t.hours.start}–${t.hours.end} local time` : describeDaylight(t.hours)}`);
+  if (t?.weekendBans) out.push(`weekends: ${describeWeekends({ bans: t.weekendBans })}`);
+  if (t?.holidays) out.push(`holidays: ${describeHolidays(t.holidays)}`);
+  for (const cf of t?.curfews ?? []) out.push(`curfew: ${cf.area} ${cf.start}–${cf.end}${cf.appliesIn === 'urban' ? ' (urban)' : ''}`);
   if (c.travelHours) out.push(`travel hours: ${c.travelHours}`);
   if (c.holidays) out.push(`holidays: ${c.holidays}`);
   if (c.maxSpeedMph) out.push(`maximum speed ${c.maxSpeedMph} mph`);

@@ -4,7 +4,7 @@ import {
   canPermitTransition, OPEN_PERMIT_STATUSES, PERMIT_STATUS_LABELS, PERMIT_STATUSES,
   type AssessmentDto, type AssignPermitsResponse, type PermitDto, type PermitOverviewDto, type PermitsPage, type PermitStatus,
   type SessionUser, type SyncPermitsResponse, type UnmetCondition,
-  type PermitConditions,
+  type PermitConditions, type PermitTerms, checkPermitTravelTerms, formatZoned, validityGaps,
 } from '@amberline/common';
 import { AuditService, diff } from '../audit/audit.service';
 import { preparedQuery } from '../database/prepared';
@@ -50,12 +50,39 @@ export class PermitsService implements OnModuleInit {
     this.registry.register({
       name: 'permits',
       unmetConditions: (ctx) => this.unmetConditions(ctx),
+      permitTerms: (move, manager) => this.permitTerms(move.id, manager),
       onPlanChanged: (ctx) => this.onPlanChanged(ctx),
       afterTransition: (ctx) => (ctx.to === 'cancelled' ? this.voidForCancelledMove(ctx.manager, ctx.move.id, ctx.actor) : Promise.resolve()),
     });
   }
 
   // ---------------------------------------------------------------- reading
+
+  /**
+   * The recorded terms of the move's issued permits, by state: what governs travel and escorts there. Escorts count
+   * only when the clerk recorded both front and rear.
+   */
+  async permitTerms(moveId: string, manager?: EntityManager): Promise<Record<string, PermitTerms>> {
+    const rows = await preparedQuery<{ jurisdiction: string; permit_number: string | null; issued_at: Date | null; conditions: PermitConditions | null }>(
+      manager ?? this.ds,
+      `SELECT jurisdiction, permit_number, issued_at, conditions FROM permits WHERE move_id = $1 AND status = 'issued' ORDER BY jurisdiction, created_at`,
+      [moveId],
+    );
+    const out: Record<string, PermitTerms> = {};
+    for (const r of rows) {
+      const c = r.conditions ?? {};
+      const hasEscorts = c.escortsFront !== undefined && c.escortsRear !== undefined;
+      if (!c.travel && !hasEscorts && c.maxSpeedMph === undefined) continue;
+      out[r.jurisdiction] = {
+        label: `${r.jurisdiction} permit ${r.permit_number ?? '(no number)'}`,
+        issuedOn: r.issued_at ? instantToLocal(new Date(r.issued_at), zoneOf(r.jurisdiction)).slice(0, 10) : 'date not recorded',
+        ...(c.travel ? { travel: c.travel } : {}),
+        ...(hasEscorts ? { escorts: { front: c.escortsFront!, rear: c.escortsRear!, ...(c.heightPole !== undefined ? { heightPole: c.heightPole } : {}) } } : {}),
+        ...(c.maxSpeedMph !== undefined ? { maxSpeedMph: c.maxSpeedMph } : {}),
+      };
+    }
+    return out;
+  }
 
   private async rows(where: string, params: unknown[], manager?: EntityManager, tail = ''): Promise<PermitRow[]> {
     return (manager ?? this.ds.manager).query(`${PERMIT_SUMMARY_SQL} WHERE ${where} ${tail}`, params);
@@ -262,8 +289,9 @@ export class PermitsService implements OnModuleInit {
       if (j.permitRequired && existing.permitted && (existing.status === 'filed' || existing.status === 'issued' || existing.status === 'needs_amendment')) {
         reasons.push(...permittedDifferences(existing.permitted, factsFromAssessment(assessment, j.code, move.planRevision)));
         if (existing.validFrom && existing.validTo && existing.status !== 'filed') {
-          const span = travelSpan(dates, zoneOf(j.code));
-          if (existing.validFrom > span.start || existing.validTo < span.end) reasons.push(`validity no longer covers the travel days ${dates[0]} to ${dates[dates.length - 1]}`);
+          const tz = zoneOf(j.code);
+          const gaps = validityGaps(j.travel, existing.validFrom, existing.validTo, (d) => formatZoned(d.getTime(), tz));
+          if (gaps.length) reasons.push(`validity no longer covers the planned travel: ${gaps.map((g) => g.message).join('; ')}`);
         }
       }
       if (reasons.length && existing.status !== 'void') {
@@ -306,7 +334,17 @@ export class PermitsService implements OnModuleInit {
       if (dto.validFrom !== undefined) next.validFrom = dto.validFrom ? localToInstant(dto.validFrom, tz, 'validFrom') : null;
       if (dto.validTo !== undefined) next.validTo = dto.validTo ? localToInstant(dto.validTo, tz, 'validTo') : null;
       if (dto.routeText !== undefined) next.routeText = dto.routeText?.trim() || null;
-      if (dto.conditions !== undefined) next.conditions = JSON.parse(JSON.stringify(dto.conditions));
+      if (dto.conditions !== undefined) {
+        const conditions: PermitConditions = JSON.parse(JSON.stringify(dto.conditions));
+        if (conditions.travel !== undefined) {
+          try {
+            conditions.travel = checkPermitTravelTerms(conditions.travel, 'conditions.travel');
+          } catch (e) {
+            throw fieldError((e as Error).message.split(' ')[0], (e as Error).message);
+          }
+        }
+        next.conditions = conditions;
+      }
       if (dto.conditionsText !== undefined) next.conditionsText = dto.conditionsText?.trim() || null;
       if (dto.actualFeeUsd !== undefined) next.actualFeeCents = dto.actualFeeUsd === null ? null : cents(dto.actualFeeUsd);
       if (dto.notes !== undefined) next.notes = dto.notes?.trim() || null;
@@ -432,12 +470,15 @@ export class PermitsService implements OnModuleInit {
         if (p.status === 'issued') push('permit_validity', 'no validity window recorded');
       } else {
         const tz = zoneOf(code);
-        const span = travelSpan(dates, tz);
         const from = new Date(p.valid_from);
         const to = new Date(p.valid_to);
-        if (from > span.start || to < span.end) {
-          push('permit_validity', `valid ${instantToLocal(from, tz).replace('T', ' ')} to ${instantToLocal(to, tz).replace('T', ' ')} (${tz}) does not cover the travel days ${dates[0]} to ${dates[dates.length - 1]}`);
-        } else if (ctx.to === 'running' && to <= now) push('permit_validity', 'has expired');
+        const days = ctx.assessment.result.jurisdictions.find((j) => j.code === code)?.travel ?? [];
+        const gaps = validityGaps(days, from, to, (d) => formatZoned(d.getTime(), tz));
+        for (const g of gaps) push('permit_validity', `valid ${formatZoned(from.getTime(), tz)} to ${formatZoned(to.getTime(), tz)}: ${g.message}`);
+        if (!gaps.length && ctx.to === 'running') {
+          if (to <= now) push('permit_validity', 'has expired');
+          else if (code === ctx.move.route[0]?.jurisdiction && from > now) push('permit_not_yet_valid', `is valid only from ${formatZoned(from.getTime(), tz)}; the move cannot run before`);
+        }
       }
     }
     return out;

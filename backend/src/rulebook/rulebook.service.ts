@@ -142,6 +142,33 @@ export class RulebookService implements OnApplicationBootstrap {
     return out;
   }
 
+  /**
+   * The rule records a move's assessment uses: the pinned version for each code that has one (a move past
+   * `requested` keeps the versions it was assessed with), the current version for the rest.
+   */
+  async rulesFor(codes: string[], pinned: Record<string, number> | null): Promise<Map<string, { id: string; record: JurisdictionRule; version: number }>> {
+    const current = await this.currentRules(codes);
+    const wanted = Object.entries(pinned ?? {}).filter(([code, v]) => codes.includes(code) && current.get(code)?.version !== v);
+    if (!wanted.length) return current;
+    const rows = await preparedQuery<{ id: string; code: string; version: number }>(
+      this.ds,
+      `SELECT v.id, v.code, v.version FROM rule_versions v JOIN unnest($1::varchar[], $2::int[]) w(code, version) ON v.code = w.code AND v.version = w.version`,
+      [wanted.map(([c]) => c), wanted.map(([, v]) => v)],
+    );
+    for (const r of rows) {
+      const record = this.records.get(r.id) ?? (await this.recordById(r.id));
+      this.records.set(r.id, record);
+      current.set(r.code, { id: r.id, record, version: r.version });
+    }
+    return current;
+  }
+
+  /** The current version number of each code. */
+  async currentVersions(codes: string[]): Promise<Record<string, number>> {
+    const rows: { code: string; current_version: number }[] = await this.ds.query(`SELECT code, current_version FROM jurisdictions WHERE code = ANY($1)`, [codes]);
+    return Object.fromEntries(rows.map((r) => [r.code, r.current_version]));
+  }
+
   private async recordById(id: string): Promise<JurisdictionRule> {
     const [row] = await this.ds.query(`SELECT record FROM rule_versions WHERE id = $1`, [id]);
     return row.record;

@@ -74,6 +74,16 @@ describe('validityGaps: a travel day is covered when every window planned for it
     expect(gaps[0].message).toMatch(/^travel window 2009-09-06 07:1\d–19:5\d America\/New_York starts before the permit is valid \(from 2009-09-06 08:00\)$/);
   });
 
+  it('where travel hours are not on file, a day is covered when the validity reaches into it (a 00:01 start is not refused)', () => {
+    const unknownHours = travelWindows({ date: '2009-09-06', ...ATL, rule: { ...openTravel(), daylight: unknown() } });
+    expect(unknownHours.unknownTopics).toContain('daylight');
+    expect(validityGaps([unknownHours], at('00:01'), at('23:59'), local)).toEqual([]);
+    const later = travelWindows({ date: '2009-09-07', ...ATL, rule: { ...openTravel(), daylight: unknown() } });
+    expect(validityGaps([unknownHours, later], at('00:01'), at('23:59'), local).map((g) => g.message)).toEqual([
+      'travel day 2009-09-07 lies outside the permit\'s validity (2009-09-06 00:01 to 2009-09-06 23:59); travel hours not on file',
+    ]);
+  });
+
   it('a permit valid to 23:59 covers a window open to midnight (valid through its last minute)', () => {
     const allDay = travelWindows({ date: '2009-09-06', ...ATL, rule: openTravel() });
     expect(validityGaps([allDay], at('00:00'), at('23:59'), local)).toEqual([]);

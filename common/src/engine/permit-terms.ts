@@ -228,21 +228,29 @@ export type ValidityGap = { date: string; window: string; message: string };
 
 /**
  * A travel day in a state is covered when every travel window planned for that day there lies inside the permit's
- * validity, to the minute. Returns each window that is not, in words ("2026-12-15 06:58–17:12 America/Chicago
- * starts before the permit is valid (from 2026-12-15 07:30)"). `local` turns an instant into local `YYYY-MM-DD HH:MM`.
+ * validity, to the minute ("valid to 23:59" holds through that minute). Where the day's travel hours are not on
+ * file the planned window is the whole day, which says nothing of when the permit lets the load move: such a day is
+ * covered when the validity reaches into it, and the permit's own hours govern. Returns each window not covered,
+ * in words. `local` turns an instant into local date and time with its zone.
  */
 export function validityGaps(days: readonly TravelWindowsResult[], validFrom: Date, validTo: Date, local: (d: Date) => string): ValidityGap[] {
   const out: ValidityGap[] = [];
   const from = validFrom.getTime();
-  // "valid to 23:59" holds through that minute
   const to = validTo.getTime() + 60_000;
+  const range = `${local(validFrom)} to ${local(validTo)}`;
   for (const d of days) {
-    for (const iv of d.intervals) {
-      const a = Date.parse(iv.start);
-      const b = Date.parse(iv.end);
-      const window = `${d.date} ${iv.startLocal}–${iv.endLocal} ${d.timeZone}${d.unknownTopics.includes('daylight') ? ' (travel hours not on file: record the permit’s travel hours)' : ''}`;
-      if (a < from) out.push({ date: d.date, window, message: `travel window ${window} starts before the permit is valid (from ${local(validFrom)})` });
-      else if (b > to) out.push({ date: d.date, window, message: `travel window ${window} ends after the permit expires (${local(validTo)})` });
+    const hoursUnknown = d.unknownTopics.includes('daylight');
+    const spans = d.intervals.map((iv) => ({ a: Date.parse(iv.start), b: Date.parse(iv.end), window: `${d.date} ${iv.startLocal}–${iv.endLocal} ${d.timeZone}` }));
+    if (hoursUnknown) {
+      if (spans.length && !spans.some((x) => x.a < to && x.b > from)) {
+        out.push({ date: d.date, window: `${d.date} ${d.timeZone}`, message: `travel day ${d.date} lies outside the permit's validity (${range}); travel hours not on file` });
+      }
+      continue;
+    }
+    for (const x of spans) {
+      if (x.a >= to || x.b <= from) out.push({ date: d.date, window: x.window, message: `travel window ${x.window} lies outside the permit's validity (${range})` });
+      else if (x.a < from) out.push({ date: d.date, window: x.window, message: `travel window ${x.window} starts before the permit is valid (from ${local(validFrom)})` });
+      else if (x.b > to) out.push({ date: d.date, window: x.window, message: `travel window ${x.window} ends after the permit expires (${local(validTo)})` });
     }
   }
   return out;

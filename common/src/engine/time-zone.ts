@@ -119,3 +119,16 @@ export const dayNumberOf = (y: number, m: number, d: number): number => Date.UTC
 /** 0 = Sunday … 6 = Saturday. */
 export const weekdayOf = (dayNumber: number): number => (((dayNumber + 4) % 7) + 7) % 7;
 export const isoOfDay = (dayNumber: number): string => new Date(dayNumber * DAY_MS).toISOString().slice(0, 10);
+
+/** The zone's short name at that instant ("CST", "EDT"; "GMT-7" where the platform has no abbreviation). */
+export function zoneAbbreviation(epochMs: number, timeZone: string): string {
+  try {
+    const part = new Intl.DateTimeFormat('en-US', { timeZone, timeZoneName: 'short' }).formatToParts(new Date(epochMs)).find((p) => p.type === 'timeZoneName');
+    return part?.value ?? timeZone;
+  } catch {
+    return timeZone;
+  }
+}
+
+/** "2026-12-15 07:12 CST": an instant as local date and time in the zone, with the zone named. */
+export const formatZoned = (epochMs: number, timeZone: string): string => `${localDate(epochMs, timeZone)} ${localClock(epochMs, timeZone)} ${zoneAbbreviation(epochMs, timeZone)}`;

@@ -94,6 +94,8 @@ export type MoveDto = Omit<MoveInput, 'route'> & {
   tractor: { id: string; unitNumber: string };
   trailer: { id: string; unitNumber: string; type: string };
   driver: { id: string; name: string } | null;
+  /** When the stage last changed (null while never changed). */
+  stageChangedAt: string | null;
   createdAt: string;
   updatedAt: string;
 };
@@ -108,9 +110,29 @@ export type AssessmentDto = {
   computedAt: string;
   /** Rulebook version used per jurisdiction. */
   ruleVersions: Record<string, number>;
+  /** True once the move has left `requested`: the assessment keeps these versions until re-assessed. */
+  pinned: boolean;
+  /** Jurisdictions whose rulebook has a newer version than the one this pinned assessment uses. */
+  newerRules: { code: string; used: number; current: number }[];
   result: PlanCheckResult;
   caution: string;
 };
+
+/** What re-assessing with the current rules would change, shown before it is applied. */
+export type ReassessmentPreview = {
+  moveId: string;
+  moveVersion: number;
+  used: Record<string, number>;
+  current: Record<string, number>;
+  /** In words, one line per change (permit need, escorts, fee, travel windows, problems). */
+  differences: string[];
+  /** False for delivered and cancelled moves: their assessment never changes. */
+  allowed: boolean;
+};
+export type ReassessRequest = { version: number; reason?: string };
+/** Reopening a cancelled move (back to requested) or one delivered within REOPEN_DELIVERED_DAYS (back to running). */
+export type ReopenRequest = { version: number; reason: string };
+export const REOPEN_DELIVERED_DAYS = 7;
 
 export type StageChangeRequest = { to: MoveStage; reason?: string; version?: number };
 /** The 409 body's `details` when a transition is refused. */

@@ -1,3 +1,4 @@
+import type { PermitTravelTerms } from '../engine/permit-terms';
 import type { MoveStage } from '../moves/stages';
 import type { Page } from './auth';
 
@@ -73,6 +74,11 @@ export type PermitConditions = {
   holidays?: string;
   maxSpeedMph?: number;
   utilityContacts?: string[];
+  /**
+   * The permit's travel limits in structured form (hours, weekends, holidays, curfews). Once the permit is issued
+   * they replace the rulebook's for this state on the run sheet and in the move's travel windows.
+   */
+  travel?: PermitTravelTerms;
 };
 
 /** How soon the permit must be filed: from the departure date and the state's lead time. */

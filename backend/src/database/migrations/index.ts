@@ -5,6 +5,7 @@ import { RunSheets1764650000000 } from './1764650000000-run-sheets';
 import { PermitQueueOrder1764660000000 } from './1764660000000-permit-queue-order';
 import { EscortsAndMail1764640000000 } from './1764640000000-escorts-and-mail';
 import { RulebookFacts1764670000000 } from './1764670000000-rulebook-facts';
+import { FrozenAssessments1764680000000 } from './1764680000000-frozen-assessments';
 
 /** Every migration, in order. Add new ones at the end; never edit one that has landed. */
 export const MIGRATIONS = [
@@ -15,4 +16,5 @@ export const MIGRATIONS = [
   RunSheets1764650000000,
   PermitQueueOrder1764660000000,
   RulebookFacts1764670000000,
+  FrozenAssessments1764680000000,
 ];

@@ -4,7 +4,7 @@ import {
 } from 'class-validator';
 import {
   ANCHOR_KINDS, LIMITS, MOVE_STAGES, WEIGHT_SOURCES,
-  type AnchorKind, type MoveArticle, type MoveInput, type MoveStage, type MoveTiedown, type RoadType, type RouteSegmentInput, type StageChangeRequest, type TiedownPath, type UpdateMoveRequest, type WeightSource,
+  type AnchorKind, type MoveArticle, type MoveInput, type MoveStage, type MoveTiedown, type RoadType, type RouteSegmentInput, type StageChangeRequest, type ReassessRequest, type ReopenRequest, type TiedownPath, type UpdateMoveRequest, type WeightSource,
 } from '@amberline/common';
 
 const ROAD_TYPES: RoadType[] = ['two-lane', 'multilane', 'interstate'];
@@ -104,3 +104,13 @@ export class StageChangeDto implements StageChangeRequest {
 }
 
 export class PreviewDto extends CreateMoveDto {}
+
+export class ReassessDto implements ReassessRequest {
+  @IsInt() @Min(1) version: number;
+  @IsOptional() @IsString() @Length(1, 500) reason?: string;
+}
+
+export class ReopenDto implements ReopenRequest {
+  @IsInt() @Min(1) version: number;
+  @IsString({ message: 'reason must say why the move is reopened' }) @Length(1, 500, { message: 'reason must say why the move is reopened (1–500 characters)' }) reason: string;
+}

@@ -36,6 +36,9 @@ export class Move {
   /** Goes up whenever dimensions, weights, equipment or route change: permits and run sheets compare it. */
   @Column({ name: 'plan_revision', type: 'int', default: 1 }) planRevision: number;
   @Column({ type: 'int', default: 1 }) version: number;
+  /** The rule versions the assessment keeps once the move has left `requested` (null while requested). */
+  @Column({ name: 'rule_versions', type: 'jsonb', nullable: true }) ruleVersions: Record<string, number> | null;
+  @Column({ name: 'stage_changed_at', type: 'timestamptz', nullable: true }) stageChangedAt: Date | null;
   @Column({ name: 'created_by', type: 'uuid', nullable: true }) createdById: string | null;
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' }) createdAt: Date;
   @UpdateDateColumn({ name: 'updated_at', type: 'timestamptz' }) updatedAt: Date;

@@ -1,10 +1,10 @@
 import { Type } from 'class-transformer';
 import {
-  ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsIn, IsInt, IsISO8601, IsNumber, IsOptional, IsString, IsUUID, Length, Matches, Max, MaxLength, Min, ValidateIf, ValidateNested,
+  ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsIn, IsInt, IsISO8601, IsNumber, IsObject, IsOptional, IsString, IsUUID, Length, Matches, Max, MaxLength, Min, ValidateIf, ValidateNested,
 } from 'class-validator';
 import {
   LIMITS, PAYMENT_STATUSES, PERMIT_SORTS, PERMIT_STATUSES, PERMIT_TYPES,
-  type AssignPermitsRequest, type PaymentStatus, type PayPermitRequest, type PermitConditions, type PermitQueueStatus, type PermitSort, type PermitStatus, type PermitType, type UpdatePermitRequest,
+  type AssignPermitsRequest, type PaymentStatus, type PayPermitRequest, type PermitConditions, type PermitTravelTerms, type PermitQueueStatus, type PermitSort, type PermitStatus, type PermitType, type UpdatePermitRequest,
 } from '@amberline/common';
 
 const LOCAL_DATE_TIME = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/;
@@ -17,6 +17,8 @@ export class PermitConditionsDto implements PermitConditions {
   @IsOptional() @IsString() @MaxLength(200) holidays?: string;
   @IsOptional() @IsInt() @Min(5, { message: 'maxSpeedMph must be at least 5' }) @Max(80, { message: 'maxSpeedMph must not exceed 80' }) maxSpeedMph?: number;
   @IsOptional() @IsArray() @ArrayMaxSize(20) @IsString({ each: true }) @MaxLength(200, { each: true }) utilityContacts?: string[];
+  /** Checked in full by the service (checkPermitTravelTerms), which names the field of any problem. */
+  @IsOptional() @IsObject({ message: 'conditions.travel must be an object with any of hours, weekendBans, holidays, curfews' }) travel?: PermitTravelTerms;
 }
 
 export class UpdatePermitDto implements UpdatePermitRequest {
