@@ -206,16 +206,28 @@ describe('moves in the browser', () => {
     expect(await history.getByTestId('history-entry').count()).toBe(3); // opened, edited by the API, edited here
 
     // a stage the permits do not allow yet is refused with the list of what is missing
+    // every step asks for confirmation first
     await page.getByTestId('stage-to-permits_received').click();
+    await page.getByRole('dialog').getByText('Every state that needs a permit has it issued').waitFor();
+    await screenshot(page, 'move-page-confirm-step');
+    await page.getByTestId('stage-confirm').click();
     await page.getByTestId('unmet-conditions').waitFor();
     expect(await page.getByTestId('unmet-conditions').textContent()).toMatch(/TX/);
     // cancelling asks for a reason, which lands in the history
     await page.getByTestId('stage-cancel').click();
-    await page.getByTestId('cancel-reason').fill('Customer postponed the job');
+    expect(await page.getByTestId('stage-confirm').isDisabled()).toBe(true); // no reason yet
+    await page.getByTestId('stage-reason').fill('Customer postponed the job');
     await page.getByRole('button', { name: 'Cancel the move' }).click();
     await page.getByTestId('stage-tag').filter({ hasText: 'Cancelled' }).waitFor();
     await history.getByText('Reason: Customer postponed the job').waitFor();
     await screenshot(page, 'move-page-cancelled');
+    // a cancelled move can be reopened, with a reason
+    await page.getByTestId('stage-reopen').click();
+    expect(await page.getByTestId('stage-confirm').isDisabled()).toBe(true);
+    await page.getByTestId('stage-reason').fill('Customer confirmed new dates');
+    await page.getByRole('button', { name: 'Reopen the move' }).click();
+    await page.getByTestId('stage-tag').filter({ hasText: 'Requested' }).waitFor();
+    await history.getByText('Reason: Customer confirmed new dates').waitFor();
     await page.close();
   }, 180_000);
 });

@@ -25,6 +25,8 @@ import { JurisdictionAssessments } from '../../../features/moves/components/juri
 import { MoveHistory } from '../../../features/moves/components/move-history';
 import { AssessmentTotals, DimensionsSummary, FederalCheck, SecurementList } from '../../../features/moves/components/plan-results';
 import { StageControl } from '../../../features/moves/components/stage-control';
+import { KeptRules } from '../../../features/moves/components/kept-rules';
+import { localInstant } from '../../../features/run-sheets/format';
 import { StageTag } from '../../../features/moves/components/stage-tag';
 import { MovePermits } from '../../../features/permits/components/move-permits';
 import { paths, to } from '../../../config/paths';
@@ -216,12 +218,13 @@ export function MovePage() {
         </Typography.Paragraph>
         {r && assessment.data ? (
           <>
+            <KeptRules move={m} assessment={assessment.data} canEdit={editable} />
             <AssessmentTotals result={r} />
             <div style={{ marginTop: 12 }}>
               <JurisdictionAssessments result={r} ruleVersions={assessment.data.ruleVersions} expandAll />
             </div>
             <Typography.Paragraph type="secondary" style={{ marginTop: 8, fontSize: 12 }}>
-              Assessed {dayjs(assessment.data.computedAt).format('D MMM YYYY HH:mm')} on move version {assessment.data.moveVersion} with rulebook{' '}
+              Assessed {localInstant(assessment.data.computedAt)} on move version {assessment.data.moveVersion} with rulebook{' '}
               {Object.entries(assessment.data.ruleVersions)
                 .map(([c, v]) => `${c} v${v}`)
                 .join(', ')}

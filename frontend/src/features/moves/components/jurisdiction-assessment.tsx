@@ -1,5 +1,5 @@
 /** Per-jurisdiction assessment: permit and why, escorts and the rule that asked, markings, travel windows, fee, superload. */
-import { Collapse, Space, Tag, Typography } from 'antd';
+import { Alert, Collapse, Space, Tag, Typography } from 'antd';
 import { formatFeetInches, formatUsd, type JurisdictionPlanResult, type PlanCheckResult } from '@amberline/common';
 import dayjs from 'dayjs';
 import { Link } from 'react-router-dom';
@@ -7,10 +7,37 @@ import { CitedSource, NotOnFile, OpenQuestions } from '../../../components/rule-
 import { to } from '../../../config/paths';
 import { ReasonLine } from './plan-results';
 
+const TOPIC_WORDS: Record<string, string> = {
+  'travel.hours': 'travel hours',
+  'travel.weekends': 'weekends',
+  'travel.holidays': 'holidays',
+  'travel.curfews': 'curfews',
+  escorts: 'escorts',
+};
+
 function JurisdictionBody({ j }: { j: JurisdictionPlanResult }) {
   const m = j.markings;
+  const g = j.governedBy;
   return (
     <div>
+      {g && (g.topics.length > 0 || g.differences.length > 0) && (
+        <Alert
+          type={g.differences.length ? 'warning' : 'info'}
+          showIcon
+          style={{ marginBottom: 8 }}
+          data-testid="permit-governs"
+          title={`The issued ${g.label} governs ${g.topics.map((t) => TOPIC_WORDS[t] ?? t).join(', ')} here`}
+          description={
+            g.differences.length > 0 && (
+              <ul style={{ margin: 0, paddingLeft: 18 }}>
+                {g.differences.map((d) => (
+                  <li key={d}>{d}</li>
+                ))}
+              </ul>
+            )
+          }
+        />
+      )}
       <Typography.Title level={5} style={{ marginTop: 0 }}>
         Permit
       </Typography.Title>
@@ -184,6 +211,7 @@ function JurisdictionHeader({ j, version }: { j: JurisdictionPlanResult; version
         )
       )}
       {j.escorts.heightPole && <Tag color="volcano">height pole</Tag>}
+      {j.governedBy && j.governedBy.topics.length > 0 && <Tag color="geekblue">permit governs</Tag>}
       {j.superload.isSuperload && <Tag color="magenta">superload</Tag>}
       {j.overweight && <Tag color="orange">overweight</Tag>}
       {j.fee && (j.fee.known ? <Tag>{formatUsd(j.fee.totalUsd)}</Tag> : <Tag style={{ borderStyle: 'dashed' }}>fee unknown</Tag>)}

@@ -20,10 +20,10 @@ const FIELD_LABELS: Record<string, string> = {
   travelDays: 'Travel days',
   notes: 'Notes',
   ruleVersions: 'Rule versions used',
-  notes_: 'Notes',
+  differences: 'What changed',
 };
 
-const ACTION_LABELS: Record<string, string> = { created: 'Move opened', updated: 'Move edited', stage: 'Stage changed' };
+const ACTION_LABELS: Record<string, string> = { created: 'Move opened', updated: 'Move edited', stage: 'Stage changed', reopened: 'Move reopened', reassessed: 'Re-assessed with current rules' };
 
 function show(key: string, v: unknown): string {
   if (v === null || v === undefined || v === '') return '—';
@@ -41,6 +41,7 @@ function show(key: string, v: unknown): string {
       .join('; ');
   }
   if (key === 'route' && Array.isArray(v)) return (v as RouteSegmentInput[]).map((s) => `${s.jurisdiction} ${s.roads} (${s.miles} mi, ${s.roadType})`).join(' → ');
+  if (key === 'differences' && Array.isArray(v)) return v.length ? v.join('; ') : 'nothing a user acts on';
   if (key === 'ruleVersions' && typeof v === 'object') return Object.entries(v as Record<string, number>).map(([c, n]) => `${c} v${n}`).join(', ');
   if (typeof v === 'object') {
     const s = JSON.stringify(v);

@@ -9,8 +9,8 @@ import {
   type PlanCheckResult,
   type Reason,
 } from '@amberline/common';
-import dayjs from 'dayjs';
 import { CitedSource, NotOnFile } from '../../../components/rule-source';
+import { localInstant } from '../../run-sheets/format';
 
 const ft = (inches: number) => formatFeetInches(Math.max(0, inches));
 const lb = (pounds: number) => formatPounds(Math.max(0, pounds));
@@ -190,7 +190,9 @@ export function AssessmentTotals({ result, column }: { result: PlanCheckResult; 
             label: 'Earliest legal start',
             children: (
               <span>
-                {s.earliestDeparture ? `${dayjs(s.earliestDeparture).format('ddd D MMM YYYY, HH:mm')} (your time zone)` : 'no window on the planned dates'}
+                {s.earliestDeparture
+                  ? `${localInstant(s.earliestDeparture, result.jurisdictions[0]?.travel[0]?.timeZone)} (${result.jurisdictions[0]?.code ?? ''} local time)`
+                  : 'no window on the planned dates'}
                 {!s.earliestDepartureKnown && (
                   <>
                     {' '}

@@ -21,8 +21,9 @@ import { useUpdatePermit } from '../api/update-permit';
 import { useUploadPermitDocument } from '../api/upload-permit-document';
 import { localText, PaymentTag, PermitStatusTag, usd } from './permit-tags';
 import { NotOnFile } from '../../../components/rule-source';
+import { fieldsToTravel, PermitTravelFields, travelToFields, type TravelFieldValues } from './permit-travel-fields';
 
-type FormValues = {
+type FormValues = TravelFieldValues & {
   permitType: PermitType;
   permitNumber?: string;
   validFrom?: string;
@@ -63,11 +64,14 @@ function toForm(p: PermitDto): FormValues {
     assigneeId: p.assignee?.id ?? null,
     notes: p.notes ?? undefined,
     ...p.conditions,
+    ...travelToFields(p.conditions.travel),
   };
 }
 
-function toRequest(v: FormValues, version: number): UpdatePermitRequest {
+function toRequest(v: FormValues, version: number, before: PermitDto): UpdatePermitRequest {
+  const travel = fieldsToTravel(v, before.conditions.travel);
   const conditions = {
+    ...(travel ? { travel } : {}),
     ...(v.escortsFront !== undefined && v.escortsFront !== null ? { escortsFront: v.escortsFront } : {}),
     ...(v.escortsRear !== undefined && v.escortsRear !== null ? { escortsRear: v.escortsRear } : {}),
     ...(v.heightPole !== undefined ? { heightPole: v.heightPole } : {}),
@@ -132,7 +136,7 @@ function PermitDetails({ p, canWork }: { p: PermitDto; canWork: boolean }) {
     } catch {
       return;
     }
-    const body = { ...toRequest(values, p.version), ...(status ? { status } : {}), ...(why ? { reason: why } : {}) };
+    const body = { ...toRequest(values, p.version, p), ...(status ? { status } : {}), ...(why ? { reason: why } : {}) };
     update.mutate(
       { id: p.id, ...body },
       {
@@ -143,8 +147,12 @@ function PermitDetails({ p, canWork }: { p: PermitDto; canWork: boolean }) {
         },
         onError: (e) => {
           if (e instanceof ApiError && e.fieldErrors().length) {
-            const known = new Set(Object.keys(toForm(p)).concat(['escortsFront', 'maxSpeedMph', 'utilityContacts']));
-            const fe = e.fieldErrors().map((f) => ({ ...f, name: f.name.replace(/^conditions\./, '') }));
+            const known = new Set(Object.keys(toForm(p)).concat(['escortsFront', 'maxSpeedMph', 'utilityContacts', 'hoursStart', 'hoursEnd', 'hoursStartOffsetMin', 'hoursEndOffsetMin', 'holidayNames', 'weekendBanDays']));
+            const TRAVEL_FIELDS: Record<string, string> = { 'travel.hours.start': 'hoursStart', 'travel.hours.end': 'hoursEnd', 'travel.hours.startOffsetMin': 'hoursStartOffsetMin', 'travel.hours.endOffsetMin': 'hoursEndOffsetMin', 'travel.holidays.names': 'holidayNames' };
+            const fe = e.fieldErrors().map((f) => {
+              const name = f.name.replace(/^conditions\./, '');
+              return { ...f, name: TRAVEL_FIELDS[name] ?? (name.startsWith('travel.weekendBans') ? 'weekendBanDays' : name) };
+            });
             form.setFields(fe.filter((f) => known.has(f.name)) as Parameters<typeof form.setFields>[0]);
             if (fe.some((f) => !known.has(f.name))) message.error(e.message);
           } else message.error(e.message);
@@ -236,8 +244,9 @@ function PermitDetails({ p, canWork }: { p: PermitDto; canWork: boolean }) {
           <Col span={6}><Form.Item name="heightPole" label="Height pole" valuePropName="checked"><Switch /></Form.Item></Col>
           <Col span={6}><Form.Item name="maxSpeedMph" label="Max speed (mph)"><InputNumber min={5} max={80} style={{ width: '100%' }} /></Form.Item></Col>
         </Row>
+        <PermitTravelFields />
         <Row gutter={12}>
-          <Col span={12}><Form.Item name="travelHours" label="Travel hours"><Input maxLength={200} placeholder="e.g. 30 min before sunrise to 30 min after sunset" /></Form.Item></Col>
+          <Col span={12}><Form.Item name="travelHours" label="Travel hours (as worded)"><Input maxLength={200} placeholder="e.g. 30 min before sunrise to 30 min after sunset" /></Form.Item></Col>
           <Col span={12}><Form.Item name="holidays" label="Holidays"><Input maxLength={200} placeholder="e.g. no travel from noon the weekday before" /></Form.Item></Col>
         </Row>
         <Form.Item name="utilityContacts" label="Utility contacts"><Select mode="tags" tokenSeparators={[';']} placeholder="name and phone; press Enter after each" /></Form.Item>
