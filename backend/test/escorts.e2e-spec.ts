@@ -424,7 +424,8 @@ describe('escort vendors and bookings (/api/vendors, /api/moves/:id/escort-booki
       const ok = await t.http().post(`/api/moves/${move.id}/stage`).set(as('dispatcher')).send({ to: 'escorts_booked' });
       expect(ok.status).toBe(201);
       const hist = (await t.http().get(`/api/moves/${move.id}/history`).set(as('dispatcher'))).body as { action: string; after: { notes?: string[] } }[];
-      expect(hist.find((h) => h.action === 'stage')?.after.notes).toEqual(['escorts not on file in the rulebook for GA: taken from the issued permit']);
+      // the permit's recorded escorts govern Georgia now: the note names the permit, not the rulebook
+      expect(hist.find((h) => h.action === 'stage')?.after.notes).toEqual([expect.stringMatching(/^no escort needed: the issued permit asks none in Georgia \(GA permit .+\)$/)]);
     });
 
     it('a plan change that raises the requirement, or moves the dates, shows as unmet again', async () => {

@@ -4,7 +4,7 @@ import { STEP_DECK_DEFAULTS, TRACTOR_DEFAULTS } from '../../seed/src/builders/fl
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { ARTIFACTS, BASE_URL, launch, screenshot, signIn } from './support/browser';
-import { apiPost, apiToken } from './support/forms';
+import { apiPost, apiToken, pick } from './support/forms';
 import { wideExcavatorArticle } from './support/fixtures';
 
 const stamp = `${Date.now().toString(36)}${process.pid.toString(36)}`.toUpperCase();
@@ -129,9 +129,17 @@ describe('the permit desk in the browser', () => {
 
     // the state issued it: number, validity (Texas time), fee
     await drawer.getByLabel('Permit number').fill(`TX-${stamp}`);
-    await drawer.getByLabel('Valid from').fill(`${day(11)}T00:00`);
+    // valid from 00:01 on the departure day, as the state wrote it
+    await drawer.getByLabel('Valid from').fill(`${departure}T00:01`);
     await drawer.getByLabel('Valid to').fill(`${day(15)}T23:59`);
     await drawer.getByLabel('Max speed (mph)').fill('45');
+    // the permit's own travel hours and weekend rule, which then govern the run sheet
+    await pick(page, 'permit-hours-kind', 'Fixed hours');
+    await drawer.getByLabel('Travel from').fill('09:00');
+    await drawer.getByLabel('Travel to').fill('15:00');
+    await pick(page, 'permit-weekends-kind', 'Weekend travel allowed');
+    await drawer.getByTestId('permit-travel-fields').scrollIntoViewIfNeeded();
+    await shot(page, 'permits-2b-travel-conditions');
     await drawer.getByLabel('Actual fee (USD)').fill('185.00');
     await drawer.getByTestId('permit-to-issued').click();
     await statusIs(page, 'Issued');
@@ -166,6 +174,22 @@ describe('the permit desk in the browser', () => {
     });
     const body = await res.json();
     expect({ status: res.status, stage: body.stage }).toEqual({ status: 201, stage: 'permits_received' });
+
+    // the run sheet shows the permit's hours, not the rulebook's, with the permit as their source
+    const desk = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+    await signIn(desk, 'dispatcher@amberline.example');
+    await desk.goto(`${BASE_URL}/run-sheets/${moveId}`);
+    const tx = desk.getByTestId('travel-TX');
+    await tx.waitFor();
+    expect(await tx.textContent()).toContain('09:00–15:00');
+    expect(await tx.getByTestId('travel-restrictions').first().textContent()).toMatch(new RegExp(`travel 09:00–15:00 local time only.*TX permit TX-${stamp}`));
+    await screenshot(desk, 'permits-6-run-sheet-permit-hours');
+    // and the move page says the permit governs there, and where it differs from the rulebook
+    await desk.goto(`${BASE_URL}/moves/${moveId}`);
+    const governs = desk.getByTestId('jurisdiction-TX').getByTestId('permit-governs');
+    await governs.waitFor();
+    expect(await governs.textContent()).toContain('travel hours — permit: 09:00–15:00 local time; rulebook: not on file');
+    await desk.close();
 
     // the ledger shows both attempts for this move
     await page.goto(`${BASE_URL}/payments`);

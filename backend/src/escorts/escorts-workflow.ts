@@ -43,13 +43,17 @@ export class EscortsWorkflow implements MoveExtension, OnModuleInit {
     if (ctx.to !== 'escorts_booked') return [];
     const coverage = await coverageOf(ctx.manager, ctx.move, ctx.assessment);
     if (!coverage.length) {
-      // a state whose escort rules are not on file was answered by its issued permit (the permits guard), not by the rulebook
-      const open = new Set(ctx.assessment.result.summary.escortsNotOnFile);
+      // where the issued permit records the escorts it governs them (whatever the rulebook had), else the rulebook answers
+      const byPermit = ctx.assessment.result.jurisdictions.filter((j) => j.governedBy?.topics.includes('escorts'));
+      const open = new Set([...ctx.assessment.result.summary.escortsNotOnFile, ...byPermit.map((j) => j.code)]);
       const known = ctx.assessment.result.jurisdictions.filter((j) => !open.has(j.code));
       const codes = known.map((j) => `${j.name} (rulebook v${ctx.assessment.ruleVersions[j.code] ?? '–'})`);
       return [
         ...(known.length ? [`no escort needed: the assessment asks for no escort in ${codes.join(', ')}`] : []),
-        ...(open.size ? [`escorts not on file in the rulebook for ${[...open].join(', ')}: taken from the issued permit`] : []),
+        ...(byPermit.length ? [`no escort needed: the issued permit asks none in ${byPermit.map((j) => `${j.name} (${j.governedBy!.label})`).join(', ')}`] : []),
+        ...(ctx.assessment.result.summary.escortsNotOnFile.length
+          ? [`escorts not on file in the rulebook for ${ctx.assessment.result.summary.escortsNotOnFile.join(', ')}: taken from the issued permit`]
+          : []),
       ];
     }
     return coverage.map((s) => `${slotLabel(s.position, s.seat)} confirmed: ${s.jurisdictions.map((j) => `${j.code} by ${j.vendor}`).join(', ')}`);

@@ -65,6 +65,7 @@ export function PermitTravelFields() {
         <Col span={8}>
           <Form.Item name="hoursKind" label="Travel hours on the permit">
             <Select
+              data-testid="permit-hours-kind"
               aria-label="Travel hours on the permit"
               options={[
                 { value: 'unstated', label: 'Not stated' },
@@ -108,6 +109,7 @@ export function PermitTravelFields() {
         <Col span={8}>
           <Form.Item name="weekendsKind" label="Weekends on the permit">
             <Select
+              data-testid="permit-weekends-kind"
               aria-label="Weekends on the permit"
               options={[
                 { value: 'unstated', label: 'Not stated' },
