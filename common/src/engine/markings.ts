@@ -29,8 +29,15 @@ export type MarkingsInput = {
   grossLb?: number;
 };
 
-export type FlagPlacement = { position: string; minSquareIn: number; colors: string; reason: string; source: string };
-export type LampPlacement = { position: string; color: 'red' | 'amber'; count: number; visibleFt?: number; reason: string; source: string };
+/**
+ * One rule that asks for a marking: its reason, its source, what it asks for there and the states whose assessment
+ * lists it. Set by `mergeMarkings` on every merged item; a single rule's item has none (its reason and source say it).
+ */
+export type MarkingAsk = { reason: string; source: string; asks: string; jurisdictions: string[] };
+
+export type FlagPlacement = { position: string; minSquareIn: number; colors: string; reason: string; source: string; askedBy?: MarkingAsk[] };
+export type LampPlacement = { position: string; color: 'red' | 'amber'; count: number; visibleFt?: number; reason: string; source: string; askedBy?: MarkingAsk[] };
+export type ReflectorPlacement = { position: string; color: 'red' | 'amber'; count: number; source: string; askedBy?: MarkingAsk[] };
 export type SignPlacement = {
   text: string;
   position: string;
@@ -41,6 +48,7 @@ export type SignPlacement = {
   colors: string;
   reason: string;
   source: string;
+  askedBy?: MarkingAsk[];
 };
 
 /** Night lamps on projecting loads, 49 CFR 393.11 Table 1 (read in a secondary summary). Apply in every jurisdiction. */
@@ -64,12 +72,14 @@ export type MarkingsResult = {
   rearFlags: 0 | 1 | 2;
   flags: FlagPlacement[];
   lamps: LampPlacement[];
-  reflectors: { position: string; color: 'red' | 'amber'; count: number; source: string }[];
+  reflectors: ReflectorPlacement[];
   signs: SignPlacement[];
   escortSigns: SignPlacement[];
   reasons: Reason[];
   /** Present when a jurisdiction rule was given: its topics not on file. */
   notOnFile?: MarkingsUnknown;
+  /** Set by `mergeMarkings`: the states whose markings were merged, in route order. */
+  jurisdictions?: string[];
   caution: string;
 };
 

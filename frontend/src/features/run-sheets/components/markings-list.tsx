@@ -1,10 +1,13 @@
-import { Typography } from 'antd';
-import type { MarkingsResult } from '@amberline/common';
+import { Tag, Typography } from 'antd';
+import { markingLines, type MarkingLine, type MarkingsResult } from '@amberline/common';
 import { CitedSource } from '../../../components/rule-source';
 
-type Item = { kind: 'flag' | 'sign' | 'lamp-red' | 'lamp-amber'; what: string; where: string; reason: string; source: string };
+type SwatchKind = 'flag' | 'sign' | 'lamp-red' | 'lamp-amber';
 
-function Swatch({ kind }: { kind: Item['kind'] }) {
+const swatchOf = (l: MarkingLine): SwatchKind => (l.kind === 'flag' ? 'flag' : l.kind === 'sign' || l.kind === 'escort-sign' ? 'sign' : l.color === 'red' ? 'lamp-red' : 'lamp-amber');
+const testIdOf = (l: MarkingLine): string => `marking-${l.kind === 'flag' ? 'flag' : l.kind === 'sign' || l.kind === 'escort-sign' ? 'sign' : 'lamp'}`;
+
+function Swatch({ kind }: { kind: SwatchKind }) {
   return (
     <svg width={18} height={16} style={{ flex: 'none', marginTop: 3 }} aria-hidden>
       {kind === 'sign' ? (
@@ -18,47 +21,47 @@ function Swatch({ kind }: { kind: Item['kind'] }) {
   );
 }
 
-/** Every flag, sign, lamp and reflector with its place, its rule and its source. */
+/**
+ * Every flag, sign, lamp and reflector the move's states ask for, one line per item and place, with every rule
+ * asking for it and its source: the same lines as the printed run sheet (both read `markingLines`).
+ */
 export function MarkingsList({ markings }: { markings: MarkingsResult }) {
-  const items: Item[] = [
-    ...markings.flags.map((f) => ({ kind: 'flag' as const, what: `Flag, ${f.minSquareIn}×${f.minSquareIn} in, ${f.colors}`, where: f.position, reason: f.reason, source: f.source })),
-    ...markings.signs.map((s) => ({
-      kind: 'sign' as const,
-      what: `"${s.text}" sign, ${s.minWidthIn}×${s.minHeightIn} in, letters ${s.letterHeightIn} in, ${s.colors}`,
-      where: s.position,
-      reason: s.reason,
-      source: s.source,
-    })),
-    ...markings.escortSigns.map((s) => ({ kind: 'sign' as const, what: `"${s.text}" sign, ${s.minWidthIn}×${s.minHeightIn} in`, where: s.position, reason: s.reason, source: s.source })),
-    ...markings.lamps.map((l) => ({
-      kind: l.color === 'red' ? ('lamp-red' as const) : ('lamp-amber' as const),
-      what: `${l.count} ${l.color} lamp${l.count === 1 ? '' : 's'}${l.visibleFt ? `, visible ${l.visibleFt} ft` : ''}`,
-      where: l.position,
-      reason: l.reason,
-      source: l.source,
-    })),
-    ...markings.reflectors.map((r) => ({
-      kind: r.color === 'red' ? ('lamp-red' as const) : ('lamp-amber' as const),
-      what: `${r.count} ${r.color} reflector${r.count === 1 ? '' : 's'}`,
-      where: r.position,
-      reason: '',
-      source: r.source,
-    })),
-  ];
-  if (items.length === 0) return <Typography.Text type="secondary">No flags, signs or lamps are asked for on this load.</Typography.Text>;
+  const lines = markingLines(markings);
+  if (lines.length === 0) return <Typography.Text type="secondary">No flags, signs or lamps are asked for on this load.</Typography.Text>;
+  const states = markings.jurisdictions ?? [];
   return (
-    <ul style={{ listStyle: 'none', padding: 0, margin: 0 }} data-testid="markings-list">
-      {items.map((i, n) => (
-        <li key={n} style={{ display: 'flex', gap: 8, padding: '6px 0', borderTop: n ? '1px solid #f1f5f9' : undefined }} data-testid={`marking-${i.kind.startsWith('lamp') ? 'lamp' : i.kind}`}>
-          <Swatch kind={i.kind} />
-          <div style={{ minWidth: 0, fontSize: 13 }}>
-            <div style={{ fontWeight: 600 }}>{i.where.charAt(0).toUpperCase() + i.where.slice(1)}</div>
-            <div>{i.what}</div>
-            {i.reason && <div style={{ color: '#475569' }}>{i.reason}</div>}
-            <CitedSource text={i.source} />
-          </div>
-        </li>
-      ))}
-    </ul>
+    <div>
+      {states.length > 1 && (
+        <Typography.Paragraph type="secondary" style={{ fontSize: 12, marginBottom: 4 }}>
+          Asked in every state of the move ({states.join(', ')}) unless a state is named.
+        </Typography.Paragraph>
+      )}
+      <ul style={{ listStyle: 'none', padding: 0, margin: 0 }} data-testid="markings-list">
+        {lines.map((l, n) => (
+          <li key={n} style={{ display: 'flex', gap: 8, padding: '6px 0', borderTop: n ? '1px solid #f1f5f9' : undefined }} data-testid={testIdOf(l)}>
+            <Swatch kind={swatchOf(l)} />
+            <div style={{ minWidth: 0, fontSize: 13 }}>
+              <div style={{ fontWeight: 600 }}>
+                {l.where.charAt(0).toUpperCase() + l.where.slice(1)}
+                {l.onlyIn && (
+                  <Tag style={{ marginLeft: 6, fontWeight: 400 }} data-testid="marking-only-in">
+                    {l.onlyIn} only
+                  </Tag>
+                )}
+              </div>
+              <div>{l.what}</div>
+              {l.rules.map((r, k) => (
+                <div key={k} data-testid="marking-rule">
+                  {r.reason && <span style={{ color: '#475569' }}>{r.reason} </span>}
+                  {r.asks && <span style={{ color: '#475569' }}>(asks {r.asks}) </span>}
+                  {r.onlyIn && <span style={{ color: '#475569' }}>[{r.onlyIn}] </span>}
+                  <CitedSource text={r.source} />
+                </div>
+              ))}
+            </div>
+          </li>
+        ))}
+      </ul>
+    </div>
   );
 }
