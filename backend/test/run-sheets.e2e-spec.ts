@@ -1,6 +1,6 @@
 import type { Role } from '@amberline/common';
 import { seedPermit, seedTractor, seedTrailer } from '@amberline/seed';
-import { daysFromNow, texasMove } from './fixtures/moves';
+import { dateIn, daysFromNow, texasMove } from './fixtures/moves';
 import { createTestApp, type TestApp } from './utils/create-test-app';
 import { embeddedFonts, pdfText } from './utils/pdf-text';
 
@@ -26,13 +26,16 @@ describe('run sheets and departure checks', () => {
   const as = (role: Role) => ({ authorization: `Bearer ${tokens[role]}` });
 
   /** A move assigned to the test driver, at escorts_booked (the permit and escort guards are tested in their own files). */
-  async function readyMove() {
-    const m = (await t.http().post('/api/moves').set(as('dispatcher')).send(texasMove(tractorId, trailerId, { driverId }))).body;
+  async function readyMove(departingToday = false) {
+    // a move runs only from its earliest legal departure: one that is to run now departs today (Texas time)
+    const m = (await t.http().post('/api/moves').set(as('dispatcher')).send(texasMove(tractorId, trailerId, { driverId, ...(departingToday ? { requestedDeparture: dateIn('America/Chicago') } : {}) }))).body;
     await t.ds.query(`UPDATE moves SET stage = 'escorts_booked' WHERE id = $1`, [m.id]);
     const sheet = (await t.http().get(`/api/moves/${m.id}/run-sheet`).set(as('driver'))).body;
     return { m, sheet };
   }
-  const goodChecks = (sheet: { checkAgainst: { heightIn: number; widthIn: number; lengthIn: number } }) => ({
+  /** The gauge pressure that reads the planned trailer-group weight on the seeded calibration (12 psi → 9,800 lb, 62 psi → 33,900 lb). */
+  const psiForPlan = (lb: number) => Math.round((12 + (lb - 9_800) / 482) * 2) / 2;
+  const goodChecks = (sheet: { checkAgainst: { heightIn: number; widthIn: number; lengthIn: number }; axles: { trailerLb: number } }) => ({
     measuredHeightIn: sheet.checkAgainst.heightIn,
     measuredWidthIn: sheet.checkAgainst.widthIn,
     measuredLengthIn: sheet.checkAgainst.lengthIn - 2,
@@ -40,7 +43,7 @@ describe('run sheets and departure checks', () => {
     tiresInflated: true,
     markingsInPlace: true,
     permitsOnBoard: true,
-    gaugeReadings: [{ group: 'trailer', psi: 60 }],
+    gaugeReadings: [{ group: 'trailer', psi: psiForPlan(sheet.axles.trailerLb) }],
   });
 
   it('shows the run sheet to the assigned driver and the office, 403 to another driver', async () => {
@@ -87,10 +90,11 @@ describe('run sheets and departure checks', () => {
   });
 
   it('passing checks, then the acknowledgement, lets the dispatcher start the move; the gauge gives an estimate', async () => {
-    const { m, sheet } = await readyMove();
-    const checks = await t.http().post(`/api/moves/${m.id}/departure-checks`).set(as('driver')).send(goodChecks(sheet));
+    const { m, sheet } = await readyMove(true);
+    // calibration 12 psi → 9,800 lb and 62 psi → 33,900 lb: 60 psi → 9,800 + 48 × 482 = 32,936 lb (affine fit, two points);
+    // the driver also weighed the group, so an estimate off the plan does not hold the move
+    const checks = await t.http().post(`/api/moves/${m.id}/departure-checks`).set(as('driver')).send({ ...goodChecks(sheet), gaugeReadings: [{ group: 'trailer', psi: 60 }], scaleWeights: [{ group: 'trailer', lb: 32_800 }] });
     expect(checks.body.outcome).toBe('passed');
-    // calibration 12 psi → 9,800 lb and 62 psi → 33,900 lb: 60 psi → 9,800 + 48 × 482 = 32,936 lb (affine fit, two points)
     expect(checks.body.gaugeEstimates[0].loadLb).toBeCloseTo(32_936, 0);
     const wrong = await t.http().post(`/api/moves/${m.id}/run-sheet/acknowledgement`).set(as('driver')).send({ fingerprint: 'f'.repeat(64) });
     expect(wrong.status).toBe(409);
@@ -100,6 +104,45 @@ describe('run sheets and departure checks', () => {
     const run = await t.http().post(`/api/moves/${m.id}/stage`).set(as('dispatcher')).send({ to: 'running' });
     expect(run.status).toBe(201);
     expect(run.body.stage).toBe('running');
+  });
+
+  describe('a gauge estimate far off the plan (more than 15 %, common practice, no published source)', () => {
+    // calibration 12 psi → 9,800 lb and 62 psi → 33,900 lb: 20 psi → 9,800 + 8 × 482 = 13,656 lb, far under the plan
+    const farOff = (sheet: Parameters<typeof goodChecks>[0]) => ({ ...goodChecks(sheet), gaugeReadings: [{ group: 'trailer', psi: 20 }] });
+
+    it('blocks the checks until the driver records a certified scale weight', async () => {
+      const { m, sheet } = await readyMove();
+      expect(Math.abs(13_656 - sheet.axles.trailerLb) / sheet.axles.trailerLb).toBeGreaterThan(0.15);
+      const blocked = await t.http().post(`/api/moves/${m.id}/departure-checks`).set(as('driver')).send(farOff(sheet));
+      expect(blocked.body.outcome).toBe('blocked');
+      expect(blocked.body.findings).toEqual([expect.objectContaining({ code: 'gauge_differs', blocking: true, message: expect.stringMatching(/^gauge estimate 13,656 lb on the trailer group is \d+ % off the planned .* \(limit 15 %, common practice\): weigh the group/) })]);
+      const weighed = await t.http().post(`/api/moves/${m.id}/departure-checks`).set(as('driver')).send({ ...farOff(sheet), scaleWeights: [{ group: 'trailer', lb: 31_200, ticket: 'CAT-55120' }] });
+      expect(weighed.body.outcome).toBe('passed');
+      expect(weighed.body.findings).toEqual([expect.objectContaining({ code: 'gauge_differs_scaled', blocking: false, message: expect.stringMatching(/certified scale weight recorded: 31,200 lb \(ticket CAT-55120\)$/) })]);
+      expect(weighed.body.scaleWeights).toEqual([{ group: 'trailer', lb: 31_200, ticket: 'CAT-55120' }]);
+    });
+
+    it('or until a dispatcher overrides with a reason; nothing else can be overridden, and only by the office', async () => {
+      const { m, sheet } = await readyMove();
+      const blocked = (await t.http().post(`/api/moves/${m.id}/departure-checks`).set(as('driver')).send(farOff(sheet))).body;
+      const url = `/api/moves/${m.id}/departure-checks/${blocked.id}/override`;
+      expect((await t.http().post(url).set(as('driver')).send({ reason: 'scale ticket seen' })).status).toBe(403);
+      const noReason = await t.http().post(url).set(as('dispatcher')).send({});
+      expect(noReason.status).toBe(400);
+      expect(noReason.body.details[0].field).toBe('reason');
+      const ok = await t.http().post(url).set(as('dispatcher')).send({ reason: 'scale ticket from the shipper: 31,150 lb on the trailer group' });
+      expect(ok.status).toBe(201);
+      expect(ok.body).toMatchObject({ outcome: 'passed', override: { reason: 'scale ticket from the shipper: 31,150 lb on the trailer group' } });
+      const ack = await t.http().post(`/api/moves/${m.id}/run-sheet/acknowledgement`).set(as('driver')).send({ fingerprint: sheet.fingerprint });
+      expect(ack.status).toBe(201);
+      const hist = (await t.http().get(`/api/moves/${m.id}/history`).set(as('dispatcher'))).body as { action: string; reason: string | null }[];
+      expect(hist.find((h) => h.action === 'departure_checks_overridden')?.reason).toMatch(/scale ticket from the shipper/);
+      // a height over the plan is never overridden
+      const tall = (await t.http().post(`/api/moves/${m.id}/departure-checks`).set(as('driver')).send({ ...farOff(sheet), measuredHeightIn: sheet.checkAgainst.heightIn + 3 })).body;
+      const refused = await t.http().post(`/api/moves/${m.id}/departure-checks/${tall.id}/override`).set(as('dispatcher')).send({ reason: 'looks fine' });
+      expect(refused.status).toBe(409);
+      expect(refused.body.message).toMatch(/Only a gauge finding can be overridden; still blocking: measured height/);
+    });
   });
 
   it('a change to the plan after the acknowledgement voids it and asks for a new one', async () => {

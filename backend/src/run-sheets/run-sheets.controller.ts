@@ -4,7 +4,7 @@ import type { Response } from 'express';
 import type { DepartureChecksDto, RunSheetDto, SessionUser } from '@amberline/common';
 import { CurrentUser } from '../core/decorators/current-user.decorator';
 import { Roles } from '../core/decorators/roles.decorator';
-import { AcknowledgeDto, DepartureChecksDtoIn } from './dto/run-sheet.dto';
+import { AcknowledgeDto, DepartureChecksDtoIn, OverrideChecksDto } from './dto/run-sheet.dto';
 import { renderRunSheetPdf } from './run-sheet-pdf';
 import { RunSheetsService } from './run-sheets.service';
 
@@ -41,6 +41,17 @@ export class RunSheetsController {
   @Roles('driver')
   submit(@Param('id', new ParseUUIDPipe()) id: string, @Body() dto: DepartureChecksDtoIn, @CurrentUser() user: SessionUser): Promise<DepartureChecksDto> {
     return this.sheets.submitChecks(id, dto, user, new Date());
+  }
+
+  @Post('departure-checks/:checksId/override')
+  @Roles('admin', 'dispatcher')
+  override(
+    @Param('id', new ParseUUIDPipe()) id: string,
+    @Param('checksId', new ParseUUIDPipe()) checksId: string,
+    @Body() dto: OverrideChecksDto,
+    @CurrentUser() user: SessionUser,
+  ): Promise<DepartureChecksDto> {
+    return this.sheets.overrideChecks(id, checksId, dto.reason, user, new Date());
   }
 
   @Post('run-sheet/acknowledgement')

@@ -2,13 +2,13 @@ import { createHash } from 'node:crypto';
 import { Injectable, OnModuleInit } from '@nestjs/common';
 import { DataSource, EntityManager, IsNull } from 'typeorm';
 import {
-  DEPARTURE_TOLERANCE_IN, estimateAxleLoadFromGauge, formatFeetInches, GAUGE_CAUTION, PLANNING_CAUTION, RULEBOOK_CAUTION,
+  assessedMarkings, DEPARTURE_TOLERANCE_IN, estimateAxleLoadFromGauge, GAUGE_PLAN_DIFF_LIMIT, formatFeetInches, GAUGE_CAUTION, PLANNING_CAUTION, RULEBOOK_CAUTION,
   type AssessmentDto, type CheckFinding, type DepartureChecksDto, type RunSheetDto, type SessionUser, type UnmetCondition,
 } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
 import { entityColumns, entityFromRow, preparedQuery } from '../database/prepared';
 import { MailService } from '../mail/mail.service';
-import { AppException } from '../core/app-exception';
+import { AppException, fieldError } from '../core/app-exception';
 import { Trailer } from '../fleet/entities/trailer.entity';
 import { User } from '../users/entities/user.entity';
 import type { Move } from '../moves/entities/move.entity';
@@ -18,6 +18,8 @@ import { AcknowledgeDto, DepartureChecksDtoIn } from './dto/run-sheet.dto';
 import { DepartureChecks } from './entities/departure-checks.entity';
 import { RunSheetAcknowledgement } from './entities/run-sheet-acknowledgement.entity';
 import { RunSheetSourcesRegistry } from './run-sheet-sources';
+
+const lbs = (v: number): string => `${Math.round(v).toLocaleString('en-US')} lb`;
 
 export const RUN_SHEET_CAUTIONS = [
   'Measure the loaded height and width before departure.',
@@ -39,7 +41,9 @@ const toChecksDto = (c: DepartureChecks): DepartureChecksDto => ({
   markingsInPlace: c.markingsInPlace,
   permitsOnBoard: c.permitsOnBoard,
   gaugeReadings: c.gaugeReadings,
+  scaleWeights: c.scaleWeights ?? [],
   gaugeEstimates: c.gaugeEstimates,
+  override: c.override ?? null,
   findings: c.findings,
   outcome: c.outcome,
   submittedAt: c.submittedAt.toISOString(),
@@ -99,7 +103,7 @@ export class RunSheetsService implements OnModuleInit {
       generatedAt: now.toISOString(),
       dimensions: r.dimensions,
       checkAgainst: permitted ? { ...permitted, source: 'permit' } : { heightIn: r.dimensions.heightIn, widthIn: r.dimensions.widthIn, lengthIn: r.dimensions.lengthIn, source: 'plan' },
-      markings: r.markings,
+      markings: assessedMarkings(r), // every state's assessed markings, merged: one line per item and place
       securement: r.securement,
       axles: { steerLb: r.axleLoads.steerLb, driveLb: r.axleLoads.driveLb, trailerLb: r.axleLoads.trailerLb, grossLb: r.axleLoads.grossLb, sliderSettingFt: move.sliderSettingFt, federal: r.federal },
       travel: r.jurisdictions.map((j) => ({ jurisdiction: j.code, name: j.name, days: j.travel })),
@@ -169,14 +173,24 @@ export class RunSheetsService implements OnModuleInit {
         const est = estimateAxleLoadFromGauge(g.psi, trailer.spec.gaugeCalibration, { plannedLb: sheet.axles.trailerLb });
         gaugeEstimates.push({ ...est, group: g.group, plannedLb: sheet.axles.trailerLb });
         const diff = est.loadLb - sheet.axles.trailerLb;
-        if (Math.abs(diff) > 0.1 * sheet.axles.trailerLb) {
-          findings.push({ code: 'gauge_differs', blocking: false, message: `gauge estimate ${Math.round(est.loadLb).toLocaleString('en-US')} lb on the trailer group differs from the plan by ${Math.round(diff).toLocaleString('en-US')} lb: ${GAUGE_CAUTION.toLowerCase()}` });
+        const share = Math.abs(diff) / sheet.axles.trailerLb;
+        if (share > GAUGE_PLAN_DIFF_LIMIT) {
+          const scale = (dto.scaleWeights ?? []).find((w) => w.group === g.group);
+          const what = `gauge estimate ${lbs(est.loadLb)} on the trailer group is ${Math.round(share * 100)} % off the planned ${lbs(sheet.axles.trailerLb)} (limit ${Math.round(GAUGE_PLAN_DIFF_LIMIT * 100)} %, common practice)`;
+          findings.push(
+            scale
+              ? { code: 'gauge_differs_scaled', blocking: false, message: `${what}; certified scale weight recorded: ${lbs(scale.lb)}${scale.ticket ? ` (ticket ${scale.ticket})` : ''}` }
+              : { code: 'gauge_differs', blocking: true, message: `${what}: weigh the group on a certified scale and record it, or ask the dispatcher to override with a reason` },
+          );
+        } else if (share > 0.1) {
+          findings.push({ code: 'gauge_note', blocking: false, message: `gauge estimate ${lbs(est.loadLb)} on the trailer group differs from the plan by ${Math.round(diff).toLocaleString('en-US')} lb: ${GAUGE_CAUTION.toLowerCase()}` });
         }
         for (const w of est.warnings) findings.push({ code: 'gauge_warning', blocking: false, message: w });
       }
       const outcome = findings.some((f) => f.blocking) ? 'blocked' : 'passed';
       const saved = await m.save(m.create(DepartureChecks, {
-        moveId, driverId: driver.id, fingerprint: sheet.fingerprint, ...dto, gaugeReadings: dto.gaugeReadings.map((g) => ({ group: g.group, psi: g.psi })), gaugeEstimates, findings, outcome, submittedAt: now,
+        moveId, driverId: driver.id, fingerprint: sheet.fingerprint, ...dto, gaugeReadings: dto.gaugeReadings.map((g) => ({ group: g.group, psi: g.psi })),
+        scaleWeights: (dto.scaleWeights ?? []).map((w) => ({ group: w.group, lb: w.lb, ...(w.ticket ? { ticket: w.ticket } : {}) })), gaugeEstimates, findings, outcome, override: null, submittedAt: now,
       }));
       await this.audit.record(m, {
         moveId, entity: 'run_sheet', entityId: saved.id, action: outcome === 'blocked' ? 'departure_blocked' : 'departure_checks_passed', actorId: driver.id,
@@ -221,6 +235,32 @@ export class RunSheetsService implements OnModuleInit {
       await this.audit.record(m, { moveId, entity: 'run_sheet', entityId: ack.id, action: 'acknowledged', actorId: driver.id, after: { fingerprint: sheet.fingerprint, checksId: checks.id } });
     });
     return this.build(moveId, driver, now);
+  }
+
+  /**
+   * A dispatcher lets the latest checks pass when what blocks them is only a gauge estimate far off the plan (the
+   * dispatcher knows the weights another way), with a reason, in the audit trail. Any other blocking finding stays.
+   */
+  async overrideChecks(moveId: string, checksId: string, reason: string, actor: SessionUser, now: Date): Promise<DepartureChecksDto> {
+    const why = reason.trim();
+    if (!why) throw fieldError('reason', 'say why the checks may pass');
+    await this.ds.transaction(async (m) => {
+      const checks = await m.findOne(DepartureChecks, { where: { id: checksId, moveId }, lock: { mode: 'pessimistic_write' } });
+      if (!checks) throw new AppException(404, 'not_found', `No departure checks ${checksId} for this move`);
+      const latest = await m.findOne(DepartureChecks, { where: { moveId }, order: { submittedAt: 'DESC' } });
+      if (latest?.id !== checks.id) throw new AppException(409, 'conflict', 'Newer departure checks were recorded; override those if needed');
+      if (checks.outcome === 'passed') throw new AppException(409, 'conflict', 'These checks already passed');
+      const others = checks.findings.filter((f) => f.blocking && f.code !== 'gauge_differs');
+      if (others.length) throw new AppException(409, 'conflict', `Only a gauge finding can be overridden; still blocking: ${others.map((f) => f.message).join('; ')}`);
+      const override = { by: { id: actor.id, name: actor.name }, reason: why, at: now.toISOString() };
+      await m.update(DepartureChecks, { id: checks.id }, { outcome: 'passed', override });
+      await this.audit.record(m, {
+        moveId, entity: 'run_sheet', entityId: checks.id, action: 'departure_checks_overridden', actorId: actor.id,
+        before: { outcome: 'blocked' }, after: { outcome: 'passed', findings: checks.findings.filter((f) => f.blocking).map((f) => f.message) }, reason: why,
+      });
+    });
+    const full = await this.ds.getRepository(DepartureChecks).findOneOrFail({ where: { id: checksId }, relations: { driver: true } });
+    return toChecksDto(full);
   }
 
   async checksHistory(moveId: string, viewer: SessionUser): Promise<DepartureChecksDto[]> {

@@ -12,6 +12,15 @@ import type { MoveDto } from './moves';
 export const DEPARTURE_TOLERANCE_IN = { height: 1, width: 1, length: 6 } as const;
 
 export type GaugeReading = { group: 'trailer'; psi: number };
+/** A certified scale weight for an axle group, recorded by the driver (it answers a gauge estimate far off the plan). */
+export type ScaleWeight = { group: 'trailer'; lb: number; ticket?: string };
+
+/**
+ * A gauge estimate more than this share off the planned group weight blocks "checks passed" until the driver
+ * records a scale weight for the group or a dispatcher overrides with a reason. Common practice, no published
+ * source: an air-suspension gauge read against a two-point calibration is good to roughly a tenth.
+ */
+export const GAUGE_PLAN_DIFF_LIMIT = 0.15;
 
 export type DepartureChecksRequest = {
   measuredHeightIn: number;
@@ -22,7 +31,12 @@ export type DepartureChecksRequest = {
   markingsInPlace: boolean;
   permitsOnBoard: boolean;
   gaugeReadings: GaugeReading[];
+  scaleWeights?: ScaleWeight[];
 };
+
+/** A dispatcher's decision to let blocked checks pass (only for gauge findings), with the reason. */
+export type ChecksOverride = { by: { id: string; name: string }; reason: string; at: string };
+export type OverrideChecksRequest = { reason: string };
 
 export type CheckFinding = { code: string; message: string; blocking: boolean };
 
@@ -31,6 +45,7 @@ export type DepartureChecksDto = DepartureChecksRequest & {
   fingerprint: string;
   outcome: 'passed' | 'blocked';
   findings: CheckFinding[];
+  override: ChecksOverride | null;
   gaugeEstimates: (GaugeEstimate & { group: string; plannedLb: number })[];
   submittedAt: string;
   driver: { id: string; name: string };

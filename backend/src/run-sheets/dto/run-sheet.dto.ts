@@ -1,10 +1,20 @@
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsNumber, IsString, Length, Max, Min, ValidateNested } from 'class-validator';
-import type { AcknowledgeRequest, DepartureChecksRequest, GaugeReading } from '@amberline/common';
+import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsNumber, IsOptional, IsString, Length, Max, Min, ValidateNested } from 'class-validator';
+import type { AcknowledgeRequest, DepartureChecksRequest, GaugeReading, OverrideChecksRequest, ScaleWeight } from '@amberline/common';
 
 export class GaugeReadingDto implements GaugeReading {
   @IsIn(['trailer']) group: 'trailer';
   @IsNumber() @Min(0) @Max(150, { message: 'psi must not exceed 150' }) psi: number;
+}
+
+export class ScaleWeightDto implements ScaleWeight {
+  @IsIn(['trailer']) group: 'trailer';
+  @IsNumber() @Min(1000, { message: 'lb must be at least 1,000' }) @Max(200_000, { message: 'lb must not exceed 200,000' }) lb: number;
+  @IsOptional() @IsString() @Length(1, 60) ticket?: string;
+}
+
+export class OverrideChecksDto implements OverrideChecksRequest {
+  @IsString({ message: 'reason must say why the checks may pass' }) @Length(3, 500, { message: 'reason must say why the checks may pass (3–500 characters)' }) reason: string;
 }
 
 export class DepartureChecksDtoIn implements DepartureChecksRequest {
@@ -16,6 +26,7 @@ export class DepartureChecksDtoIn implements DepartureChecksRequest {
   @IsBoolean() markingsInPlace: boolean;
   @IsBoolean() permitsOnBoard: boolean;
   @IsArray() @ArrayMaxSize(4) @ValidateNested({ each: true }) @Type(() => GaugeReadingDto) gaugeReadings: GaugeReadingDto[];
+  @IsOptional() @IsArray() @ArrayMaxSize(4) @ValidateNested({ each: true }) @Type(() => ScaleWeightDto) scaleWeights?: ScaleWeightDto[];
 }
 
 export class AcknowledgeDto implements AcknowledgeRequest {

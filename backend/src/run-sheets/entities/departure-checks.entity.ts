@@ -1,5 +1,5 @@
 import { Column, Entity, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
-import type { CheckFinding, DepartureChecksDto, GaugeReading } from '@amberline/common';
+import type { CheckFinding, ChecksOverride, DepartureChecksDto, GaugeReading, ScaleWeight } from '@amberline/common';
 import { User } from '../../users/entities/user.entity';
 
 const numeric = { to: (v: number) => v, from: (v: string) => Number(v) };
@@ -20,7 +20,10 @@ export class DepartureChecks {
   @Column({ name: 'permits_on_board', type: 'boolean' }) permitsOnBoard: boolean;
   @Column({ name: 'gauge_readings', type: 'jsonb' }) gaugeReadings: GaugeReading[];
   @Column({ name: 'gauge_estimates', type: 'jsonb' }) gaugeEstimates: DepartureChecksDto['gaugeEstimates'];
+  @Column({ name: 'scale_weights', type: 'jsonb', default: () => `'[]'::jsonb` }) scaleWeights: ScaleWeight[];
   @Column({ type: 'jsonb' }) findings: CheckFinding[];
+  /** Set when a dispatcher let checks blocked only by gauge findings pass, with the reason. */
+  @Column({ type: 'jsonb', nullable: true }) override: ChecksOverride | null;
   @Column({ type: 'varchar', length: 10 }) outcome: 'passed' | 'blocked';
   @Column({ name: 'submitted_at', type: 'timestamptz', default: () => 'now()' }) submittedAt: Date;
 }

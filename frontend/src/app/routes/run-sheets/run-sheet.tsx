@@ -183,7 +183,7 @@ export function RunSheetPage() {
         </Typography.Paragraph>
         {latest && (
           <div style={{ marginBottom: 12 }}>
-            <ChecksResult checks={latest} stale={latestStale} />
+            <ChecksResult checks={latest} stale={latestStale} moveId={sheet.move.id} canOverride={user?.role === 'dispatcher' || user?.role === 'admin'} />
           </div>
         )}
         {isDriver && checksOpen && (sheet.acknowledgement?.current && !checkAgain ? (

@@ -1,5 +1,5 @@
 import { App, Button, Checkbox, Form, Input, InputNumber, Typography } from 'antd';
-import { DEPARTURE_TOLERANCE_IN, parseFeetInches, type DepartureChecksRequest, type RunSheetDto } from '@amberline/common';
+import { DEPARTURE_TOLERANCE_IN, GAUGE_PLAN_DIFF_LIMIT, parseFeetInches, type DepartureChecksRequest, type RunSheetDto } from '@amberline/common';
 import { ApiError } from '../../../lib/api-client';
 import { useSubmitDepartureChecks } from '../api/submit-departure-checks';
 import { ftIn } from '../format';
@@ -13,6 +13,8 @@ type Values = {
   markingsInPlace: boolean;
   permitsOnBoard: boolean;
   psi: number | null;
+  scaleLb: number | null;
+  scaleTicket?: string;
 };
 
 const FIELD_OF: Record<string, keyof Values> = {
@@ -24,6 +26,8 @@ const FIELD_OF: Record<string, keyof Values> = {
   markingsInPlace: 'markingsInPlace',
   permitsOnBoard: 'permitsOnBoard',
   'gaugeReadings[0].psi': 'psi',
+  'scaleWeights[0].lb': 'scaleLb',
+  'scaleWeights[0].ticket': 'scaleTicket',
 };
 
 const feetInchesRule = {
@@ -56,6 +60,7 @@ export function DepartureChecksForm({ sheet }: { sheet: RunSheetDto }) {
       markingsInPlace: !!v.markingsInPlace,
       permitsOnBoard: !!v.permitsOnBoard,
       gaugeReadings: v.psi === null || v.psi === undefined ? [] : [{ group: 'trailer', psi: v.psi }],
+      ...(v.scaleLb ? { scaleWeights: [{ group: 'trailer' as const, lb: v.scaleLb, ...(v.scaleTicket?.trim() ? { ticket: v.scaleTicket.trim() } : {}) }] } : {}),
     };
     try {
       const res = await submit.mutateAsync({ moveId: sheet.move.id, ...body });
@@ -83,7 +88,7 @@ export function DepartureChecksForm({ sheet }: { sheet: RunSheetDto }) {
   );
 
   return (
-    <Form form={form} layout="vertical" onFinish={onFinish} requiredMark={false} data-testid="departure-checks-form" initialValues={{ psi: null }}>
+    <Form form={form} layout="vertical" onFinish={onFinish} requiredMark={false} data-testid="departure-checks-form" initialValues={{ psi: null, scaleLb: null }}>
       <Typography.Paragraph type="secondary" style={{ fontSize: 13 }}>
         Measure the loaded combination with a tape or a measuring pole. Feet and inches, like 14&apos;2&quot;.
       </Typography.Paragraph>
@@ -117,6 +122,17 @@ export function DepartureChecksForm({ sheet }: { sheet: RunSheetDto }) {
         style={{ marginBottom: 12 }}
       >
         <InputNumber min={0} max={150} step={0.5} inputMode="decimal" size="large" style={{ width: 160 }} suffix="psi" data-testid="gauge-psi" />
+      </Form.Item>
+      <Form.Item
+        name="scaleLb"
+        label="Certified scale weight, trailer group (lb)"
+        extra={`If you weighed the trailer group on a certified scale. A gauge estimate more than ${Math.round(GAUGE_PLAN_DIFF_LIMIT * 100)} % off the plan blocks departure until a scale weight is recorded or the dispatcher overrides it.`}
+        style={{ marginBottom: 8 }}
+      >
+        <InputNumber min={1000} max={200000} step={10} inputMode="numeric" size="large" style={{ width: 200 }} suffix="lb" data-testid="scale-lb" />
+      </Form.Item>
+      <Form.Item name="scaleTicket" label="Scale ticket number" style={{ marginBottom: 12 }}>
+        <Input size="large" maxLength={60} style={{ width: 200 }} data-testid="scale-ticket" />
       </Form.Item>
       <Button type="primary" htmlType="submit" size="large" block loading={submit.isPending} data-testid="submit-checks">
         Record departure checks
