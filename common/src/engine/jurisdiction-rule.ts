@@ -165,6 +165,7 @@ export type FlagRule = {
   whenOversize?: boolean;
   minCount: number;
   maxCount?: number;
+  /** Side of the square flag in inches: "18 inches square" = 18 (not the area). */
   minSquareIn: number;
   colors: string;
 };
