@@ -1,6 +1,6 @@
 import { createEvent } from 'ics';
 import {
-  BOOKING_STATUS_LABELS, ESCORT_CERTIFICATION_NOTE, ESCORT_POSITION_LABELS, formatFeetInches, formatPounds, jurisdictionByCode, slotLabel,
+  BOOKING_STATUS_LABELS, ESCORT_CERTIFICATION_NOTE, ESCORT_POSITION_LABELS, formatFeetInches, formatPounds, formatZoned, jurisdictionByCode, slotLabel,
 } from '@amberline/common';
 import type { OutgoingMail } from '../mail/mail.service';
 import type { EscortBooking } from './entities/escort-booking.entity';
@@ -33,6 +33,10 @@ export function runDetails(b: EscortBooking): string {
   return lines.join('\n');
 }
 
+/** Times in these mails are read in the zone of the first state the escort covers. */
+const zoneOfBooking = (b: EscortBooking): string => jurisdictionByCode(b.jurisdictions[0] ?? '')?.timeZone ?? 'America/Chicago';
+const linkExpiry = (b: EscortBooking, at: Date): string => formatZoned(at.getTime(), zoneOfBooking(b));
+
 const signature = (b: EscortBooking) =>
   b.requestSummary.requestedBy ? `${b.requestSummary.requestedBy.name}, dispatch\n${b.requestSummary.requestedBy.email}` : 'Dispatch';
 
@@ -50,7 +54,7 @@ export function requestMail(b: EscortBooking, v: VendorContact, link: string, ex
       '',
       'Confirm the dates (with the operator, vehicle, phone and certificate numbers), decline, or propose other dates here:',
       link,
-      `The link works once and until ${expiresAt.toISOString().replace('T', ' ').slice(0, 16)} UTC.`,
+      `The link works once and until ${linkExpiry(b, expiresAt)}.`,
       ...(certs.length ? ['', `${stateNames(certs)} ask for an escort operator certificate. ${ESCORT_CERTIFICATION_NOTE}`] : []),
       '',
       CAUTION,
@@ -68,13 +72,13 @@ export function reminderMail(b: EscortBooking, v: VendorContact, link: string, e
     text: [
       `Hello ${v.contactName},`,
       '',
-      `We have not had your answer to our escort request of ${b.requestedAt.toISOString().slice(0, 10)}.`,
+      `We have not had your answer to our escort request of ${formatZoned(b.requestedAt.getTime(), zoneOfBooking(b))}.`,
       '',
       runDetails(b),
       '',
       'Answer here (a new link; the earlier one also works until it expires):',
       link,
-      `This link works once and until ${expiresAt.toISOString().replace('T', ' ').slice(0, 16)} UTC.`,
+      `This link works once and until ${linkExpiry(b, expiresAt)}.`,
       '',
       signature(b),
     ].join('\n'),

@@ -1,7 +1,7 @@
 import { Injectable, Logger } from '@nestjs/common';
 import { Cron } from '@nestjs/schedule';
 import { DataSource, type EntityManager } from 'typeorm';
-import type { ExpiryScanResult } from '@amberline/common';
+import { formatZoned, type ExpiryScanResult } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
 import { MailService } from '../mail/mail.service';
 import { travelDates } from '../moves/assessment.service';
@@ -51,7 +51,7 @@ export class ExpiryScanService {
       await this.mail.enqueue(m, {
         to,
         subject: `Permit warning: ${row.reference} ${row.jurisdiction} ${row.permit_number ?? ''} ${f.warning}`.replace(/\s+/g, ' ').trim(),
-        text: `The ${row.jurisdiction} permit ${row.permit_number ?? '(no number)'} of move ${row.reference} ${f.warning}.\n\nRenew or amend it before the move runs: the permit desk lists it under "expiring soon".\n\nAmberline checked this on ${now.toISOString().slice(0, 16).replace('T', ' ')} UTC.`,
+        text: `The ${row.jurisdiction} permit ${row.permit_number ?? '(no number)'} of move ${row.reference} ${f.warning}.\n\nRenew or amend it before the move runs: the permit desk lists it under "expiring soon".\n\nAmberline checked this on ${formatZoned(now.getTime(), zoneOf(row.jurisdiction))}.`,
         dedupeKey: `permit-expiry:${f.permitId}:${f.warning}`,
         related: { entity: 'permit', id: f.permitId },
       });

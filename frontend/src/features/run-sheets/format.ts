@@ -13,17 +13,7 @@ export function calendarDate(date: string | null | undefined): string {
   return new Intl.DateTimeFormat('en-US', { timeZone: 'UTC', weekday: 'short', day: 'numeric', month: 'short', year: 'numeric' }).format(d);
 }
 
-/** An instant in a jurisdiction's own zone: `Tue, Jan 12, 07:14 CST`. */
-export function localInstant(iso: string | null | undefined, timeZone?: string): string {
-  if (!iso) return '—';
-  const d = new Date(iso);
-  if (Number.isNaN(d.getTime())) return iso;
-  try {
-    return new Intl.DateTimeFormat('en-US', { timeZone, weekday: 'short', month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZoneName: 'short' }).format(d);
-  } catch {
-    return d.toISOString().slice(0, 16).replace('T', ' ') + ' UTC';
-  }
-}
+export { localInstant } from '../../lib/time';
 
 /** `HH:MM` wall clock of an instant in a zone. */
 export function localClock(iso: string | null | undefined, timeZone: string): string | null {

@@ -1,3 +1,4 @@
+import { localInstant } from '../../../lib/time';
 import { useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { Alert, App, AutoComplete, Button, Card, Descriptions, Form, Input, Radio, Result, Space, Spin, Table, Typography } from 'antd';
@@ -138,7 +139,7 @@ function RequestView({ r }: { r: EscortRequestView }) {
         ]}
       />
       <Typography.Paragraph type="secondary" style={{ marginTop: 8, fontSize: 12 }}>
-        This link works once, until {r.linkExpiresAt.slice(0, 16).replace('T', ' ')} UTC.
+        This link works once, until {localInstant(r.linkExpiresAt)}.
         {r.certificationStates.length > 0 && ` ${r.certificationStates.map(stateName).join(', ')} ask escort operators for a certificate. ${ESCORT_CERTIFICATION_NOTE}`}
       </Typography.Paragraph>
     </Card>

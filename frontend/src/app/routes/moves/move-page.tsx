@@ -26,7 +26,7 @@ import { MoveHistory } from '../../../features/moves/components/move-history';
 import { AssessmentTotals, DimensionsSummary, FederalCheck, SecurementList } from '../../../features/moves/components/plan-results';
 import { StageControl } from '../../../features/moves/components/stage-control';
 import { KeptRules } from '../../../features/moves/components/kept-rules';
-import { localInstant } from '../../../features/run-sheets/format';
+import { localInstant } from '../../../lib/time';
 import { StageTag } from '../../../features/moves/components/stage-tag';
 import { MovePermits } from '../../../features/permits/components/move-permits';
 import { paths, to } from '../../../config/paths';

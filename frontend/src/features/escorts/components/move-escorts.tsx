@@ -1,3 +1,4 @@
+import { localInstant } from '../../../lib/time';
 import { useMemo, useState } from 'react';
 import { Alert, App, Button, Drawer, Form, Input, Modal, Select, Space, Table, Tag, Typography } from 'antd';
 import {
@@ -157,7 +158,7 @@ export function MoveEscorts({ moveId }: { moveId: string }) {
 function AnswerText({ booking: b }: { booking: EscortBookingDto }) {
   const a = b.answer;
   const lines: React.ReactNode[] = [];
-  if (b.status === 'requested') lines.push(<span key="w">Link sent {b.requestedAt.slice(0, 10)}{b.linkExpiresAt ? `, valid to ${b.linkExpiresAt.slice(0, 16).replace('T', ' ')} UTC` : ''}{b.reminderSentAt ? '; reminder sent' : ''}</span>);
+  if (b.status === 'requested') lines.push(<span key="w">Link sent {b.requestedAt.slice(0, 10)}{b.linkExpiresAt ? `, valid to ${localInstant(b.linkExpiresAt)}` : ''}{b.reminderSentAt ? '; reminder sent' : ''}</span>);
   if (a?.decision === 'confirm') {
     lines.push(<span key="c" data-testid="answer-operator">{a.operatorName} · {a.phone} · {a.vehicle}</span>);
     if (a.certifications?.length) lines.push(<span key="cc">Certificates: {a.certifications.map((c) => `${c.state} ${c.number}`).join(', ')}</span>);

@@ -10,7 +10,7 @@ import {
   type Reason,
 } from '@amberline/common';
 import { CitedSource, NotOnFile } from '../../../components/rule-source';
-import { localInstant } from '../../run-sheets/format';
+import { localInstant } from '../../../lib/time';
 
 const ft = (inches: number) => formatFeetInches(Math.max(0, inches));
 const lb = (pounds: number) => formatPounds(Math.max(0, pounds));
