@@ -1,4 +1,3 @@
-import { dirname } from 'node:path';
 import PDFDocument from 'pdfkit';
 import { formatFeetInches, formatPounds, markingLines, type MarkingLine, type RunSheetDto } from '@amberline/common';
 
@@ -15,7 +14,7 @@ type Doc = InstanceType<typeof PDFDocument>;
 type GlyphSource = { hasGlyphForCodePoint(codePoint: number): boolean };
 // the font reader pdfkit embeds the font with (a dependency of pdfkit, resolved from it)
 // eslint-disable-next-line @typescript-eslint/no-require-imports
-const fontkit: { openSync(path: string): GlyphSource } = require(require.resolve('fontkit', { paths: [dirname(require.resolve('pdfkit'))] }));
+const fontkit: { openSync(path: string): GlyphSource } = require('fontkit');
 let shipped: GlyphSource[] | undefined;
 const covered = new Map<number, boolean>();
 
