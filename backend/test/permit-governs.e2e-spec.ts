@@ -207,6 +207,45 @@ describe('the permit governs', () => {
     });
   });
 
+  describe('the day plan and the schedule check', () => {
+    const texasNewMexico = {
+      route: [
+        { order: 1, jurisdiction: 'TX', roads: 'I-10 W', miles: 180, roadType: 'interstate', zip: '78624' },
+        { order: 2, jurisdiction: 'NM', roads: 'I-10 W to Las Cruces', miles: 45, roadType: 'interstate', zip: '88001' },
+      ],
+      destination: 'Las Cruces, NM',
+      travelDays: 2,
+    };
+
+    it('puts each state on the days it is driven, from the daily distance, and refuses a distance that needs more days', async () => {
+      const move = await newMove(texasNewMexico);
+      const spread = (await t.http().get(`/api/moves/${move.id}/schedule`).set(as('dispatcher'))).body;
+      // 225 mi over 2 days: 113 mi a day (the route's own miles; no outside source involved)
+      expect(spread).toMatchObject({ dailyMilesSet: false, plan: { dailyMiles: 113, daysNeeded: 2 } });
+      expect(spread.days.map((d: { states: { jurisdiction: string }[] }) => d.states.map((x) => x.jurisdiction))).toEqual([['TX'], ['TX', 'NM']]);
+      const tooShort = await t.http().patch(`/api/moves/${move.id}`).set(as('dispatcher')).send({ version: move.version, dailyMiles: 100 });
+      expect(tooShort.status).toBe(400);
+      expect(tooShort.body.details[0]).toMatchObject({ field: 'dailyMiles', reason: expect.stringMatching(/take 3 days; the move plans 2/) });
+      const long = await t.http().patch(`/api/moves/${move.id}`).set(as('dispatcher')).send({ version: move.version, dailyMiles: 250 });
+      expect(long.status).toBe(200);
+      const plan = (await t.http().get(`/api/moves/${move.id}/schedule`).set(as('dispatcher'))).body;
+      expect(plan.days[0].states.map((x: { jurisdiction: string }) => x.jurisdiction)).toEqual(['TX', 'NM']);
+      expect(plan.days[1].states).toEqual([]);
+    });
+
+    it('a permit that does not cover a planned day in its state holds the run, named by day and window', async () => {
+      const move = await newMove({ route: [{ order: 1, jurisdiction: 'VA', roads: 'US 360', miles: 200, roadType: 'two-lane', zip: '23219' }], origin: 'Richmond, VA', destination: 'Danville, VA', travelDays: 2 });
+      const p = await permitOf(move.id, 'VA');
+      await issue(p, { validFrom: `${daysFromNow(10)}T00:01`, validTo: `${daysFromNow(10)}T23:59` });
+      const schedule = (await t.http().get(`/api/moves/${move.id}/schedule`).set(as('dispatcher'))).body;
+      expect(schedule.ok).toBe(false);
+      expect(schedule.findings).toEqual([expect.objectContaining({ code: 'permit_validity', jurisdiction: 'VA', date: daysFromNow(11), blocking: true })]);
+      await t.ds.query(`UPDATE moves SET stage = 'escorts_booked', version = version + 1 WHERE id = $1`, [move.id]);
+      const unmet = await unmetFor(move.id, 'running');
+      expect(unmet.find((u) => u.code === 'schedule_permit_validity')?.message).toMatch(new RegExp(`^schedule: VA permit on ${daysFromNow(11)}: travel window ${daysFromNow(11)} .* lies outside the permit's validity`));
+    });
+  });
+
   describe('stages with dates', () => {
     it('a move cannot run before its earliest legal departure, and the refusal says when that is, with its zone', async () => {
       const move = await newMove();

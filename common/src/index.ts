@@ -1,5 +1,6 @@
 export * from './auth/roles';
 export * from './moves/stages';
+export * from './moves/schedule';
 export * from './errors/error-codes';
 export * from './validation/limits';
 export * from './types/auth';

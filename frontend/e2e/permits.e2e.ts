@@ -83,7 +83,7 @@ describe('the permit desk in the browser', () => {
     }
     expect(consoleErrors).toEqual([]);
     await page.close();
-  }, 120_000);
+  }, 180_000);
 
   /** The move page, once its assessment has loaded (it is long: a click before then can land on shifting content). */
   async function openMovePage(page: Page): Promise<void> {
@@ -180,7 +180,10 @@ describe('the permit desk in the browser', () => {
     await signIn(desk, 'dispatcher@amberline.example');
     await desk.goto(`${BASE_URL}/run-sheets/${moveId}`);
     const tx = desk.getByTestId('travel-TX');
-    await tx.waitFor();
+    await tx.waitFor({ timeout: 60_000 }).catch(async (e) => {
+      await screenshot(desk, 'permits-6-run-sheet-failure');
+      throw e;
+    });
     expect(await tx.textContent()).toContain('09:00–15:00');
     expect(await tx.getByTestId('travel-restrictions').first().textContent()).toMatch(new RegExp(`travel 09:00–15:00 local time only.*TX permit TX-${stamp}`));
     await screenshot(desk, 'permits-6-run-sheet-permit-hours');

@@ -1,8 +1,9 @@
 import { Injectable, OnModuleInit } from '@nestjs/common';
-import { In } from 'typeorm';
-import { jurisdictionByCode, slotLabel, type UnmetCondition } from '@amberline/common';
+import { In, type EntityManager } from 'typeorm';
+import { jurisdictionByCode, requiredEscortSlots, slotLabel, type AssessmentDto, type UnmetCondition } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
 import { MoveExtensionsRegistry, type MoveExtension, type PlanChangeContext, type TransitionContext } from '../moves/move-extensions';
+import type { Move } from '../moves/entities/move.entity';
 import { MovesService } from '../moves/moves.service';
 import { EscortBooking } from './entities/escort-booking.entity';
 import { ACTIVE_STATUSES, coverageOf } from './escort-bookings.service';
@@ -37,6 +38,17 @@ export class EscortsWorkflow implements MoveExtension, OnModuleInit {
         .filter((j) => j.status !== 'confirmed')
         .map((j) => ({ code: 'escort_unconfirmed', jurisdiction: j.code, message: `${slotLabel(s.position, s.seat)} escort in ${j.name}: ${STATUS_TEXT[j.status]}` })),
     );
+  }
+
+  /** For the schedule check: the positions the assessment needs and the confirmed bookings' dates. */
+  async scheduleFacts(ctx: { manager: EntityManager; move: Move; assessment: AssessmentDto }) {
+    const slots = requiredEscortSlots(ctx.assessment.result.jurisdictions);
+    if (!slots.length) return {};
+    const confirmed = await ctx.manager.find(EscortBooking, { where: { moveId: ctx.move.id, status: 'confirmed' } });
+    return {
+      escortSlots: slots.map((s) => ({ label: slotLabel(s.position, s.seat), jurisdictions: s.jurisdictions.map((j) => j.code) })),
+      escorts: confirmed.map((b) => ({ label: slotLabel(b.position, b.seat), jurisdictions: b.jurisdictions, startDate: b.startDate, endDate: b.endDate })),
+    };
   }
 
   async transitionNotes(ctx: TransitionContext): Promise<string[]> {

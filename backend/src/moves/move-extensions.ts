@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import type { MoveStage, SessionUser, UnmetCondition } from '@amberline/common';
-import type { AssessmentDto, PermitTerms } from '@amberline/common';
+import type { AssessmentDto, PermitTerms, ScheduleInput } from '@amberline/common';
 import type { Move } from './entities/move.entity';
 
 export type TransitionContext = { manager: EntityManager; move: Move; to: MoveStage; assessment: AssessmentDto; actor: SessionUser };
@@ -21,6 +21,8 @@ export interface MoveExtension {
   afterTransition?(ctx: TransitionContext & { from: MoveStage }): Promise<void>;
   /** Runs in the same transaction when dimensions, weights, equipment or the route change. */
   onPlanChanged?(ctx: PlanChangeContext): Promise<void>;
+  /** What the schedule check needs from this module: issued permits' validity, escort positions and confirmed bookings. */
+  scheduleFacts?(ctx: { manager: EntityManager; move: Move; assessment: AssessmentDto }): Promise<Partial<Pick<ScheduleInput, 'permits' | 'escortSlots' | 'escorts'>>>;
   /** Issued permits' recorded terms by jurisdiction: they govern the move's travel windows and escorts. */
   permitTerms?(move: Move, manager: EntityManager): Promise<Record<string, PermitTerms>>;
 }

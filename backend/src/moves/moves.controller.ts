@@ -1,6 +1,6 @@
 import { Body, Controller, Get, Param, ParseUUIDPipe, Patch, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import type { AssessmentDto, HistoryEntryDto, MoveDto, MovesPage, ReassessmentPreview, SessionUser, StageCounts } from '@amberline/common';
+import type { AssessmentDto, HistoryEntryDto, MoveDto, MovesPage, ReassessmentPreview, ScheduleDto, SessionUser, StageCounts } from '@amberline/common';
 import { CurrentUser } from '../core/decorators/current-user.decorator';
 import { Roles } from '../core/decorators/roles.decorator';
 import { CreateMoveDto, ListMovesQuery, PreviewDto, ReassessDto, ReopenDto, StageChangeDto, UpdateMoveDto } from './dto/move.dto';
@@ -80,6 +80,12 @@ export class MovesController {
   @Roles('admin', 'dispatcher')
   reassess(@Param('id', new ParseUUIDPipe()) id: string, @Body() dto: ReassessDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
     return this.workflow.reassess(id, dto, user, new Date());
+  }
+
+  @Get(':id/schedule')
+  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  schedule(@Param('id', new ParseUUIDPipe()) id: string, @CurrentUser() user: SessionUser): Promise<ScheduleDto> {
+    return this.workflow.scheduleOf(id, user, new Date());
   }
 
   @Get(':id/history')

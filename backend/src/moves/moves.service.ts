@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { DataSource, EntityManager } from 'typeorm';
 import {
-  MOVE_STAGES, type AssessmentDto, type HistoryEntryDto, type MoveDto, type MoveStage, type MoveSummaryDto, type MovesPage, type PermitTerms,
+  dayPlan, MOVE_STAGES, type AssessmentDto, type HistoryEntryDto, type MoveDto, type MoveStage, type MoveSummaryDto, type MovesPage, type PermitTerms,
   type SessionUser, type StageCounts,
 } from '@amberline/common';
 import { AuditService, diff } from '../audit/audit.service';
@@ -39,6 +39,7 @@ export function toMoveDto(m: Move): MoveDto {
     requestedDeparture: m.requestedDeparture,
     travelDays: m.travelDays,
     travelDates: travelDates(m.requestedDeparture, m.travelDays),
+    dailyMiles: m.dailyMiles,
     driverId: m.driverId,
     ...(m.notes ? { notes: m.notes } : {}),
     tractor: { id: m.tractorId, unitNumber: m.tractor?.unitNumber ?? '' },
@@ -54,7 +55,7 @@ export function toMoveDto(m: Move): MoveDto {
 const auditView = (m: Move) => ({
   customer: m.customer, customerRef: m.customerRef, commodity: m.commodity, stage: m.stage, tractorId: m.tractorId, trailerId: m.trailerId,
   driverId: m.driverId, sliderSettingFt: m.sliderSettingFt, articles: m.articles, route: m.route, origin: m.origin, destination: m.destination,
-  requestedDeparture: m.requestedDeparture, travelDays: m.travelDays, notes: m.notes,
+  requestedDeparture: m.requestedDeparture, travelDays: m.travelDays, dailyMiles: m.dailyMiles, notes: m.notes,
 });
 
 /** Today's date where the day starts last in the contiguous US (Pacific), `YYYY-MM-DD`. */
@@ -113,6 +114,15 @@ export class MovesService {
     if (!d || d.role !== 'driver' || !d.active) throw fieldError('driverId', 'no active driver with this id');
   }
 
+  /** A daily distance that would need more days than the move plans is refused, naming the field. */
+  private checkDailyMiles(route: { order: number; jurisdiction: string; miles: number }[], travelDays: number, dailyMiles: number | null | undefined): void {
+    if (dailyMiles === null || dailyMiles === undefined) return;
+    const plan = dayPlan(route, travelDates(new Date().toISOString().slice(0, 10), travelDays), dailyMiles);
+    if (plan.daysNeeded > travelDays) {
+      throw fieldError('dailyMiles', `at ${dailyMiles} mi a day the route's ${Math.round(plan.totalMiles)} mi take ${plan.daysNeeded} days; the move plans ${travelDays} (raise the daily distance or add travel days)`);
+    }
+  }
+
   private checkPlanFields(dto: Partial<CreateMoveDto>, trailer: Trailer, now: Date, departureChanged: boolean): void {
     if (dto.sliderSettingFt !== undefined && dto.sliderSettingFt !== null) {
       const s = trailer.spec.slider;
@@ -141,6 +151,7 @@ export class MovesService {
       const { tractor, trailer } = await this.equipment(m, dto.tractorId, dto.trailerId);
       await this.checkDriver(m, dto.driverId);
       this.checkPlanFields(dto, trailer, now, true);
+      this.checkDailyMiles(route, dto.travelDays, dto.dailyMiles);
       const a = await this.assessments.assess({ ...dto, route, tractor, trailer });
       const [{ n }] = await m.query(`SELECT nextval('move_reference_seq')::int AS n`);
       const move = m.create(Move, {
@@ -160,6 +171,7 @@ export class MovesService {
         destination: dto.destination.trim(),
         requestedDeparture: dto.requestedDeparture,
         travelDays: dto.travelDays,
+        dailyMiles: dto.dailyMiles ?? null,
         notes: dto.notes ?? null,
         summary: summarize(a.result),
         createdById: actor.id,
@@ -193,6 +205,7 @@ export class MovesService {
       const { tractor, trailer } = await this.equipment(m, after.tractorId, after.trailerId);
       if (changes.driverId !== undefined) await this.checkDriver(m, changes.driverId);
       this.checkPlanFields({ ...changes, sliderSettingFt: after.sliderSettingFt }, trailer, now, changes.requestedDeparture !== undefined && changes.requestedDeparture !== before.requestedDeparture);
+      this.checkDailyMiles(after.route, after.travelDays, after.dailyMiles);
       const changedPlan = PLAN_FIELDS.filter((f) => JSON.stringify(before[f]) !== JSON.stringify(after[f]));
       if (changedPlan.length) {
         const a = await this.assessments.assess({ ...after, tractor, trailer }, { pinned: before.ruleVersions });
@@ -212,7 +225,7 @@ export class MovesService {
           customer: after.customer, customerRef: after.customerRef, commodity: after.commodity, tractorId: after.tractorId, trailerId: after.trailerId,
           driverId: after.driverId, sliderSettingFt: after.sliderSettingFt, articles: after.articles, route: after.route, jurisdictions: after.jurisdictions,
           origin: after.origin, destination: after.destination, requestedDeparture: after.requestedDeparture, travelDays: after.travelDays,
-          notes: after.notes, summary: after.summary, planRevision: after.planRevision, version: after.version, ruleVersions: after.ruleVersions,
+          dailyMiles: after.dailyMiles, notes: after.notes, summary: after.summary, planRevision: after.planRevision, version: after.version, ruleVersions: after.ruleVersions,
         })
         .where('id = :id AND version = :v', { id, v: before.version })
         .execute();

@@ -2,12 +2,13 @@ import { Injectable } from '@nestjs/common';
 import { DataSource, EntityManager } from 'typeorm';
 import {
   assessmentDifferences, canTransition, formatZoned, MOVE_STAGE_LABELS, REOPEN_DELIVERED_DAYS, zonedTimeToUtc,
-  type MoveDto, type MoveStage, type ReassessmentPreview, type SessionUser, type UnmetCondition,
+  type MoveDto, type MoveStage, type ReassessmentPreview, type ScheduleDto, type SessionUser, type UnmetCondition,
 } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
 import { AppException, fieldError } from '../core/app-exception';
 import { ReassessDto, ReopenDto, StageChangeDto } from './dto/move.dto';
 import { summarize } from './assessment.service';
+import { ScheduleService } from './schedule.service';
 import { Move } from './entities/move.entity';
 import { MoveExtensionsRegistry, type TransitionContext } from './move-extensions';
 import { MovesService, toMoveDto } from './moves.service';
@@ -47,6 +48,7 @@ export class WorkflowService {
     private readonly moves: MovesService,
     private readonly audit: AuditService,
     private readonly extensions: MoveExtensionsRegistry,
+    private readonly schedule: ScheduleService,
   ) {}
 
   async transition(id: string, dto: StageChangeDto, actor: SessionUser, now: Date): Promise<MoveDto> {
@@ -67,6 +69,11 @@ export class WorkflowService {
       const ctx: TransitionContext = { manager, move, to: dto.to, assessment, actor };
       const unmet: UnmetCondition[] = dto.to === 'cancelled' ? [] : [...baseConditions(ctx, now)];
       const notes: string[] = [];
+      if (dto.to === 'running') {
+        // the day plan's dates must agree with the travel windows, permits and escorts before the move rolls
+        const s = await this.schedule.forMove(move, assessment, manager);
+        for (const f of s.findings.filter((x) => x.blocking)) unmet.push({ code: `schedule_${f.code}`, message: `schedule: ${f.message}`, ...(f.jurisdiction ? { jurisdiction: f.jurisdiction } : {}) });
+      }
       if (dto.to !== 'cancelled') {
         for (const ext of this.extensions.all()) {
           if (ext.unmetConditions) unmet.push(...(await ext.unmetConditions(ctx)));
@@ -123,6 +130,12 @@ export class WorkflowService {
       });
     });
     return toMoveDto(await this.moves.get(id));
+  }
+
+  /** The move's schedule check, as the move page shows it. */
+  async scheduleOf(id: string, viewer: SessionUser, now: Date): Promise<ScheduleDto> {
+    const move = await this.moves.get(id, viewer);
+    return this.schedule.forMove(move, await this.moves.assessmentOf(move, now), this.ds.manager);
   }
 
   /** What re-assessing with the current rules would change (nothing is written). */

@@ -4,7 +4,7 @@ import {
   canPermitTransition, OPEN_PERMIT_STATUSES, PERMIT_STATUS_LABELS, PERMIT_STATUSES,
   type AssessmentDto, type AssignPermitsResponse, type PermitDto, type PermitOverviewDto, type PermitsPage, type PermitStatus,
   type SessionUser, type SyncPermitsResponse, type UnmetCondition,
-  type PermitConditions, type PermitTerms, checkPermitTravelTerms, formatZoned, validityGaps,
+  type PermitConditions, type PermitTerms, checkPermitTravelTerms, datesByState, formatZoned, validityGaps,
 } from '@amberline/common';
 import { AuditService, diff } from '../audit/audit.service';
 import { preparedQuery } from '../database/prepared';
@@ -13,6 +13,7 @@ import { travelDates } from '../moves/assessment.service';
 import { Move } from '../moves/entities/move.entity';
 import { MoveExtensionsRegistry, type PlanChangeContext, type TransitionContext } from '../moves/move-extensions';
 import { MovesService } from '../moves/moves.service';
+import { planOf } from '../moves/schedule.service';
 import { User } from '../users/entities/user.entity';
 import { AssignPermitsDto, ListPermitsQuery, UpdatePermitDto } from './dto/permit.dto';
 import { PermitDocument } from './entities/permit-document.entity';
@@ -51,6 +52,13 @@ export class PermitsService implements OnModuleInit {
       name: 'permits',
       unmetConditions: (ctx) => this.unmetConditions(ctx),
       permitTerms: (move, manager) => this.permitTerms(move.id, manager),
+      scheduleFacts: async ({ manager, move }) => {
+        const rows: { jurisdiction: string; valid_from: Date | null; valid_to: Date | null }[] = await manager.query(
+          `SELECT jurisdiction, valid_from, valid_to FROM permits WHERE move_id = $1 AND status = 'issued' AND valid_from IS NOT NULL AND valid_to IS NOT NULL`,
+          [move.id],
+        );
+        return { permits: Object.fromEntries(rows.map((r) => [r.jurisdiction, { validFrom: new Date(r.valid_from!).toISOString(), validTo: new Date(r.valid_to!).toISOString() }])) };
+      },
       onPlanChanged: (ctx) => this.onPlanChanged(ctx),
       afterTransition: (ctx) => (ctx.to === 'cancelled' ? this.voidForCancelledMove(ctx.manager, ctx.move.id, ctx.actor) : Promise.resolve()),
     });
@@ -290,7 +298,8 @@ export class PermitsService implements OnModuleInit {
         reasons.push(...permittedDifferences(existing.permitted, factsFromAssessment(assessment, j.code, move.planRevision)));
         if (existing.validFrom && existing.validTo && existing.status !== 'filed') {
           const tz = zoneOf(j.code);
-          const gaps = validityGaps(j.travel, existing.validFrom, existing.validTo, (d) => formatZoned(d.getTime(), tz));
+          const inState = datesByState(planOf(move))[j.code] ?? [];
+          const gaps = validityGaps(j.travel.filter((d) => inState.includes(d.date)), existing.validFrom, existing.validTo, (d) => formatZoned(d.getTime(), tz));
           if (gaps.length) reasons.push(`validity no longer covers the planned travel: ${gaps.map((g) => g.message).join('; ')}`);
         }
       }
@@ -472,7 +481,9 @@ export class PermitsService implements OnModuleInit {
         const tz = zoneOf(code);
         const from = new Date(p.valid_from);
         const to = new Date(p.valid_to);
-        const days = ctx.assessment.result.jurisdictions.find((j) => j.code === code)?.travel ?? [];
+        // the days the day plan puts the move in this state
+        const inState = datesByState(planOf(ctx.move))[code] ?? [];
+        const days = (ctx.assessment.result.jurisdictions.find((j) => j.code === code)?.travel ?? []).filter((d) => inState.includes(d.date));
         const gaps = validityGaps(days, from, to, (d) => formatZoned(d.getTime(), tz));
         for (const g of gaps) push('permit_validity', `valid ${formatZoned(from.getTime(), tz)} to ${formatZoned(to.getTime(), tz)}: ${g.message}`);
         if (!gaps.length && ctx.to === 'running') {

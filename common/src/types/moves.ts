@@ -1,3 +1,4 @@
+import type { ScheduleResult } from '../moves/schedule';
 import type { MoveStage } from '../moves/stages';
 import type { PlanCheckResult, PlanArticle } from '../engine/plan-check';
 import type { RoadType } from '../engine/jurisdiction-rule';
@@ -64,6 +65,8 @@ export type MoveInput = {
   requestedDeparture: string;
   /** Planned travel days from departure (1 = departs and arrives the same day). */
   travelDays: number;
+  /** Miles a day for the day plan; null = the route's miles spread over the travel days. */
+  dailyMiles?: number | null;
   driverId?: string | null;
   notes?: string;
 };
@@ -117,6 +120,9 @@ export type AssessmentDto = {
   result: PlanCheckResult;
   caution: string;
 };
+
+/** The move's schedule check: its day plan against travel windows, issued permits and confirmed escorts. */
+export type ScheduleDto = ScheduleResult & { moveId: string; moveVersion: number; /** False when the daily distance is the route spread over the travel days. */ dailyMilesSet: boolean };
 
 /** What re-assessing with the current rules would change, shown before it is applied. */
 export type ReassessmentPreview = {

@@ -1,6 +1,6 @@
 import { Type } from 'class-transformer';
 import {
-  ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsIn, IsInt, IsISO8601, IsNumber, IsOptional, IsString, IsUUID, Length, Matches, Max, MaxLength, Min, ValidateNested,
+  ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsIn, IsInt, IsISO8601, IsNumber, IsOptional, IsString, IsUUID, Length, Matches, Max, MaxLength, Min, ValidateIf, ValidateNested,
 } from 'class-validator';
 import {
   ANCHOR_KINDS, LIMITS, MOVE_STAGES, WEIGHT_SOURCES,
@@ -66,6 +66,7 @@ export class CreateMoveDto implements MoveInput {
   @IsString() @Length(1, 200) destination: string;
   @IsISO8601({ strict: true }, { message: 'requestedDeparture must be a YYYY-MM-DD date' }) @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'requestedDeparture must be a YYYY-MM-DD date' }) requestedDeparture: string;
   @IsInt() @Min(1) @Max(30) travelDays: number;
+  @IsOptional() @ValidateIf((_, v) => v !== null) @IsInt({ message: 'dailyMiles must be whole miles' }) @Min(20, { message: 'dailyMiles must be at least 20' }) @Max(1000, { message: 'dailyMiles must not exceed 1,000' }) dailyMiles?: number | null;
   @IsOptional() @IsUUID('4', { message: 'driverId must be the id of a driver' }) driverId?: string | null;
   @IsOptional() @IsString() @MaxLength(2000) notes?: string;
 }
@@ -84,6 +85,7 @@ export class UpdateMoveDto implements UpdateMoveRequest {
   @IsOptional() @IsString() @Length(1, 200) destination?: string;
   @IsOptional() @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'requestedDeparture must be a YYYY-MM-DD date' }) requestedDeparture?: string;
   @IsOptional() @IsInt() @Min(1) @Max(30) travelDays?: number;
+  @IsOptional() @ValidateIf((_, v) => v !== null) @IsInt({ message: 'dailyMiles must be whole miles' }) @Min(20, { message: 'dailyMiles must be at least 20' }) @Max(1000, { message: 'dailyMiles must not exceed 1,000' }) dailyMiles?: number | null;
   @IsOptional() @IsUUID('4', { message: 'driverId must be the id of a driver' }) driverId?: string | null;
   @IsOptional() @IsString() @MaxLength(2000) notes?: string;
 }

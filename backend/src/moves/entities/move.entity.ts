@@ -31,6 +31,8 @@ export class Move {
   @Column({ type: 'varchar', length: 200 }) destination: string;
   @Column({ name: 'requested_departure', type: 'date' }) requestedDeparture: string;
   @Column({ name: 'travel_days', type: 'int', default: 1 }) travelDays: number;
+  /** Miles a day for the day plan (null = the route spread over the travel days). */
+  @Column({ name: 'daily_miles', type: 'int', nullable: true }) dailyMiles: number | null;
   @Column({ type: 'text', nullable: true }) notes: string | null;
   @Column({ type: 'jsonb', default: () => `'{}'::jsonb` }) summary: MoveSummary;
   /** Goes up whenever dimensions, weights, equipment or route change: permits and run sheets compare it. */
