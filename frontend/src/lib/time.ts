@@ -11,3 +11,12 @@ export function localInstant(iso: string | null | undefined, timeZone?: string):
     return d.toISOString().slice(0, 16).replace('T', ' ') + ' UTC';
   }
 }
+
+/** `2027-01-12` → `Tue 12 Jan 2027` (a calendar date, no time zone involved). */
+export function calendarDate(date: string | null | undefined): string {
+  if (!date) return '—';
+  const m = /^(\d{4})-(\d{2})-(\d{2})/.exec(date);
+  if (!m) return date;
+  const d = new Date(Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3])));
+  return new Intl.DateTimeFormat('en-US', { timeZone: 'UTC', weekday: 'short', day: 'numeric', month: 'short', year: 'numeric' }).format(d);
+}

@@ -4,16 +4,7 @@ import { formatFeetInches, formatPounds } from '@amberline/common';
 export const ftIn = (inches: number | null | undefined): string => (inches === null || inches === undefined || !Number.isFinite(inches) || inches < 0 ? '—' : formatFeetInches(inches));
 export const lb = (pounds: number | null | undefined): string => (pounds === null || pounds === undefined || !Number.isFinite(pounds) || pounds < 0 ? '—' : formatPounds(pounds));
 
-/** `2027-01-12` → `Tue 12 Jan 2027` (a calendar date, no time zone involved). */
-export function calendarDate(date: string | null | undefined): string {
-  if (!date) return '—';
-  const m = /^(\d{4})-(\d{2})-(\d{2})/.exec(date);
-  if (!m) return date;
-  const d = new Date(Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3])));
-  return new Intl.DateTimeFormat('en-US', { timeZone: 'UTC', weekday: 'short', day: 'numeric', month: 'short', year: 'numeric' }).format(d);
-}
-
-export { localInstant } from '../../lib/time';
+export { calendarDate, localInstant } from '../../lib/time';
 
 /** `HH:MM` wall clock of an instant in a zone. */
 export function localClock(iso: string | null | undefined, timeZone: string): string | null {

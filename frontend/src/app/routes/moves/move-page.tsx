@@ -26,6 +26,7 @@ import { MoveHistory } from '../../../features/moves/components/move-history';
 import { AssessmentTotals, DimensionsSummary, FederalCheck, SecurementList } from '../../../features/moves/components/plan-results';
 import { StageControl } from '../../../features/moves/components/stage-control';
 import { KeptRules } from '../../../features/moves/components/kept-rules';
+import { ScheduleTimeline } from '../../../features/moves/components/schedule-timeline';
 import { localInstant } from '../../../lib/time';
 import { StageTag } from '../../../features/moves/components/stage-tag';
 import { MovePermits } from '../../../features/permits/components/move-permits';
@@ -97,6 +98,7 @@ export function MovePage() {
         items={[
           { key: 'plan', href: '#load-plan', title: 'Load plan' },
           { key: 'route', href: '#route-assessment', title: 'Route and assessment' },
+          { key: 'schedule', href: '#schedule', title: 'Day plan' },
           { key: 'permits', href: '#permits', title: 'Permits' },
           { key: 'escorts', href: '#escorts', title: 'Escorts' },
           { key: 'history', href: '#history', title: 'History' },
@@ -234,6 +236,10 @@ export function MovePage() {
         ) : (
           !assessment.isError && <Spin />
         )}
+      </Card>
+
+      <Card id="schedule" title="Day plan and schedule check" style={{ marginBottom: 16 }} data-testid="section-schedule">
+        <ScheduleTimeline move={m} canEdit={editable} />
       </Card>
 
       <Card id="permits" title="Permits" style={{ marginBottom: 16 }} data-testid="section-permits">
