@@ -20,3 +20,19 @@ export function calendarDate(date: string | null | undefined): string {
   const d = new Date(Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3])));
   return new Intl.DateTimeFormat('en-US', { timeZone: 'UTC', weekday: 'short', day: 'numeric', month: 'short', year: 'numeric' }).format(d);
 }
+
+/** `2026-12-10 00:01 CST`: an instant as local date and time in the zone, with the zone's short name. */
+export function zonedDateTime(iso: string | null | undefined, timeZone: string): string {
+  if (!iso) return '—';
+  const d = new Date(iso);
+  if (Number.isNaN(d.getTime())) return iso;
+  const parts = Object.fromEntries(
+    new Intl.DateTimeFormat('en-US', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZoneName: 'short' })
+      .formatToParts(d)
+      .map((p) => [p.type, p.value]),
+  );
+  return `${parts.year}-${parts.month}-${parts.day} ${parts.hour}:${parts.minute} ${parts.timeZoneName}`;
+}
+
+/** A validity window in the state's zone: `2026-12-10 00:01 CST – 2026-12-13 23:59 CST`. */
+export const zonedRange = (from: string | null, to: string | null, timeZone: string): string => (from && to ? `${zonedDateTime(from, timeZone)} – ${zonedDateTime(to, timeZone)}` : '—');

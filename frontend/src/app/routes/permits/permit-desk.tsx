@@ -1,3 +1,4 @@
+import { zonedRange } from '../../../lib/time';
 import { useState } from 'react';
 import { Alert, App, Button, Card, Col, Empty, Row, Select, Space, Statistic, Table, Typography } from 'antd';
 import type { SortOrder } from 'antd/es/table/interface';
@@ -34,9 +35,7 @@ const order = (f: PermitsFilter, key: string): SortOrder | undefined => {
 };
 
 const validityText = (p: PermitSummaryDto) => {
-  if (!p.validFrom || !p.validTo) return '—';
-  const fmt = (iso: string) => new Intl.DateTimeFormat('en-CA', { timeZone: p.timeZone, year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(new Date(iso)).replace(',', '');
-  return `${fmt(p.validFrom)} – ${fmt(p.validTo)}`;
+  return zonedRange(p.validFrom, p.validTo, p.timeZone);
 };
 
 /** The permit desk: one queue across all moves, ordered by how soon each permit must be filed. */

@@ -1,3 +1,4 @@
+import { zonedRange } from '../../../lib/time';
 import { useState } from 'react';
 import { Alert, App, Button, Space, Table, Typography } from 'antd';
 import type { PermitDto } from '@amberline/common';
@@ -7,7 +8,7 @@ import { downloadPermitDocument } from '../api/download-file';
 import { useMovePermits } from '../api/get-move-permits';
 import { useSyncMovePermits } from '../api/sync-move-permits';
 import { PermitDrawer } from './permit-drawer';
-import { localText, PaymentTag, PermitStatusTag, usd } from './permit-tags';
+import { PaymentTag, PermitStatusTag, usd } from './permit-tags';
 
 /** The permits of one move, shown on the move page: status, validity, fee, PDFs; create them from the assessment. */
 export function MovePermits({ moveId }: { moveId: string }) {
@@ -52,7 +53,7 @@ export function MovePermits({ moveId }: { moveId: string }) {
           { title: 'State', dataIndex: 'jurisdiction', render: (c: string, p) => (canOpen ? <Button type="link" size="small" onClick={() => setOpen(p.id)} data-testid={`open-permit-${c}`}>{p.jurisdictionName}</Button> : p.jurisdictionName) },
           { title: 'Status', dataIndex: 'status', render: (s: PermitDto['status']) => <PermitStatusTag status={s} /> },
           { title: 'Number', dataIndex: 'permitNumber', render: (v: string | null) => v ?? '—' },
-          { title: 'Valid', render: (_: unknown, p) => (p.validFromLocal ? `${localText(p.validFromLocal)} – ${localText(p.validToLocal)}` : '—') },
+          { title: 'Valid', render: (_: unknown, p) => zonedRange(p.validFrom, p.validTo, p.timeZone) },
           { title: 'Fee', render: (_: unknown, p) => (p.actualFeeUsd === null && p.estimatedFeeUsd === null ? 'unknown (not on file)' : `${usd(p.actualFeeUsd ?? p.estimatedFeeUsd)}${p.actualFeeUsd === null ? ' est.' : ''}`) },
           { title: 'Payment', dataIndex: 'paymentStatus', render: (s: PermitDto['paymentStatus']) => <PaymentTag status={s} /> },
           {
