@@ -2,6 +2,7 @@
 import {
   JurisdictionRule,
   LampRule,
+  MEASURE_LABELS,
   MeasuredLoad,
   cite,
   isKnown,
@@ -171,7 +172,7 @@ export function projectingLoadMarkings(input: MarkingsInput, rule?: Jurisdiction
   for (const set of lampSets) {
     for (const lr of set.rules) {
       if (!fires(lr.when)) continue;
-      const reason = `${lr.note ?? 'at night'}: ${lr.when.map((t) => `${t.measure} ${t.over !== undefined ? `over ${t.over}` : `at least ${t.atLeast}`} in`).join(' or ')}`;
+      const reason = `${lr.note ?? 'at night'}: ${lr.when.map(triggerWords).join(' or ')}`;
       for (const l of lr.lamps) lamps.push({ ...l, reason, source: set.source });
       for (const rf of lr.reflectors ?? []) reflectors.push({ ...rf, source: set.source });
       reasons.push({ code: 'lamps', message: `lamps ${reason}`, source: set.source });
@@ -215,6 +216,12 @@ function signAt(sr: SignRule, src: KnownFact<SignRule[]>, position: string, reas
   };
 }
 
+/** "side projection over 0'4"", "gross at least 120,000 lb". */
+function triggerWords(t: Trigger): string {
+  const v = (n: number) => (t.measure === 'gross' ? `${Math.round(n).toLocaleString('en-US')} lb` : formatFeetInches(n));
+  return `${MEASURE_LABELS[t.measure]} ${t.over !== undefined ? `over ${v(t.over)}` : `at least ${v(t.atLeast ?? 0)}`}`;
+}
+
 function describeSignTrigger(sr: SignRule): string {
-  return sr.when.map((t) => `${t.measure} ${t.over !== undefined ? `over ${formatFeetInches(t.over)}` : `at least ${formatFeetInches(t.atLeast ?? 0)}`}`).join(' or ');
+  return sr.when.map(triggerWords).join(' or ');
 }
