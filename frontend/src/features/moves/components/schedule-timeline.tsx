@@ -56,6 +56,7 @@ export function ScheduleTimeline({ move, canEdit }: { move: MoveDto; canEdit: bo
         size="small"
         rowKey="date"
         pagination={false}
+        scroll={{ x: 'max-content' }}
         dataSource={s.days}
         columns={[
           { title: 'Day', dataIndex: 'date', width: 150, render: (d: string) => calendarDate(d) },
