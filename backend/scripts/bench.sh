@@ -19,7 +19,10 @@ bash backend/scripts/pg.sh recreate
 export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT/$PGDB"
 bash backend/scripts/pg.sh psql -qc "CREATE EXTENSION IF NOT EXISTS pg_stat_statements" >/dev/null
 bash backend/scripts/build.sh
-export JWT_SECRET="bench-secret-not-for-production" NODE_ENV=production PORT="${BENCH_PORT:-3300}" HOST=127.0.0.1
+# production mode refuses secrets written in the repository: this run makes its own
+rand() { node -e "process.stdout.write('$1' + require('crypto').randomBytes(24).toString('hex'))"; }
+export JWT_SECRET="$(rand '')" STRIPE_SECRET_KEY="$(rand sk_test_)" STRIPE_WEBHOOK_SECRET="$(rand whsec_)"
+export NODE_ENV=production PORT="${BENCH_PORT:-3300}" HOST=127.0.0.1
 source backend/scripts/fakes.sh
 start_fakes
 node backend/dist/database/migrate.js

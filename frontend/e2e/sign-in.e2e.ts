@@ -30,6 +30,33 @@ describe('sign-in in the browser', () => {
     await page.close();
   });
 
+  it('an outage (503) keeps the session and says the service is unavailable; a real 401 signs out', async () => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
+    await signIn(page, 'dispatcher@amberline.example');
+    await page.getByTestId('current-role').waitFor();
+    // the service answers 503 for a while (as it does while its database is down)
+    const down = { statusCode: 503, error: 'service_unavailable', message: 'The service is unavailable for the moment (the database cannot be reached); try again shortly' };
+    let outage = true;
+    await page.route('**/api/**', (r) => (outage ? r.fulfill({ status: 503, contentType: 'application/json', headers: { 'retry-after': '30' }, body: JSON.stringify(down) }) : r.continue()));
+    await page.goto(`${BASE_URL}/moves`);
+    await page.getByTestId('service-unavailable').waitFor();
+    expect(await page.evaluate(() => localStorage.getItem('amberline.token'))).not.toBeNull();
+    await screenshot(page, 'sign-in-outage-keeps-session');
+    // back up: the notice goes and the user is still signed in
+    outage = false;
+    await page.reload();
+    await page.getByTestId('moves-table').or(page.getByTestId('move-link').first()).first().waitFor({ timeout: 20_000 }).catch(() => undefined);
+    await page.getByTestId('current-role').waitFor();
+    await page.waitForLoadState('networkidle');
+    expect(await page.getByTestId('service-unavailable').count()).toBe(0);
+    // a 401 from the server (here: a token it does not accept) really ends the session
+    await page.evaluate(() => localStorage.setItem('amberline.token', 'not-a-token'));
+    await page.goto(`${BASE_URL}/moves`);
+    await page.getByLabel('E-mail').waitFor({ timeout: 15_000 });
+    expect(await page.evaluate(() => localStorage.getItem('amberline.token'))).toBeNull();
+    await page.close();
+  }, 60_000);
+
   it('shows the error for a wrong password and stays on the sign-in page', async () => {
     const page = await browser.newPage();
     await signIn(page, 'dispatcher@amberline.example', 'not-the-password');

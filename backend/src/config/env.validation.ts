@@ -55,6 +55,11 @@ export class EnvironmentVariables {
   @Matches(/^whsec_[A-Za-z0-9_]+$/, { message: 'STRIPE_WEBHOOK_SECRET must look like whsec_…' })
   STRIPE_WEBHOOK_SECRET?: string;
 
+  /** The reverse proxy whose X-Forwarded-For is believed (Express "trust proxy": loopback, a subnet, a hop count); unset = none. */
+  @IsOptional()
+  @Matches(/^[A-Za-z0-9.:/, -]{1,200}$/, { message: 'TRUST_PROXY must be a hop count or a list of addresses, subnets or loopback/linklocal/uniquelocal' })
+  TRUST_PROXY?: string;
+
   /** Where permit PDFs are stored (by SHA-256); default `.data/files` under the project. */
   @IsOptional()
   @IsString()
@@ -94,12 +99,29 @@ export class EnvironmentVariables {
   ESCORT_REMINDER_INTERVAL_MS?: string;
 }
 
+/** Secrets written in the repository (test scripts, the local fake): never accepted in production. */
+const REPOSITORY_SECRETS: Record<string, string[]> = {
+  JWT_SECRET: ['test-secret-not-for-production'],
+  STRIPE_SECRET_KEY: ['sk_test_amberline_local'],
+  STRIPE_WEBHOOK_SECRET: ['whsec_amberline_local'],
+};
+
+/** In production every secret must be set, and none may be a value written in the repository. */
+function productionSecretProblems(env: EnvironmentVariables): string[] {
+  if (env.NODE_ENV !== 'production') return [];
+  const out: string[] = [];
+  for (const [name, known] of Object.entries(REPOSITORY_SECRETS)) {
+    const v = (env as unknown as Record<string, string | undefined>)[name];
+    if (!v) out.push(`  ${name}: must be set in production`);
+    else if (known.includes(v)) out.push(`  ${name}: is the development value written in the repository; set this machine's own secret`);
+  }
+  return out;
+}
+
 export function validateEnv(config: Record<string, unknown>): EnvironmentVariables {
   const env = plainToInstance(EnvironmentVariables, config, { enableImplicitConversion: false });
   const errors = validateSync(env, { skipMissingProperties: false, whitelist: false });
-  if (errors.length > 0) {
-    const lines = errors.map((e) => `  ${e.property}: ${Object.values(e.constraints ?? {}).join('; ') || 'invalid'}`);
-    throw new Error(`Invalid environment configuration:\n${lines.join('\n')}`);
-  }
+  const lines = [...errors.map((e) => `  ${e.property}: ${Object.values(e.constraints ?? {}).join('; ') || 'invalid'}`), ...productionSecretProblems(env)];
+  if (lines.length > 0) throw new Error(`Invalid environment configuration:\n${lines.join('\n')}`);
   return env;
 }

@@ -8,6 +8,8 @@ export class AppException extends HttpException {
     readonly code: ErrorCode,
     message: string,
     readonly details?: FieldError[] | Record<string, unknown>,
+    /** Response headers to send with the error (e.g. Retry-After on 429 and 503). */
+    readonly headers?: Record<string, string>,
   ) {
     super({ message, code, details }, status);
   }

@@ -26,6 +26,15 @@ export const setUnauthorizedHandler = (fn: () => void) => {
   onUnauthorized = fn;
 };
 
+/** Whether the service answered 503 (database or server unavailable) on the last call; the session is kept. */
+type Availability = (unavailable: boolean) => void;
+const availabilityListeners = new Set<Availability>();
+export const onAvailability = (fn: Availability): (() => void) => {
+  availabilityListeners.add(fn);
+  return () => availabilityListeners.delete(fn);
+};
+const announce = (unavailable: boolean) => availabilityListeners.forEach((fn) => fn(unavailable));
+
 export async function api<T>(path: string, init: RequestInit & { json?: unknown } = {}): Promise<T> {
   const headers = new Headers(init.headers);
   const token = tokenStore.get();
@@ -35,13 +44,27 @@ export async function api<T>(path: string, init: RequestInit & { json?: unknown 
     headers.set('content-type', 'application/json');
     body = JSON.stringify(init.json);
   }
-  const res = await fetch(`/api${path}`, { ...init, headers, body });
+  let res: Response;
+  try {
+    res = await fetch(`/api${path}`, { ...init, headers, body });
+  } catch {
+    announce(true);
+    throw new ApiError(503, { statusCode: 503, error: 'service_unavailable', message: 'The service cannot be reached; check the connection and try again' });
+  }
+  announce(res.status === 503 || res.status === 502 || res.status === 504);
   if (res.status === 204) return undefined as T;
   const text = await res.text();
-  const data = text ? JSON.parse(text) : undefined;
+  let data: unknown;
+  try {
+    data = text ? JSON.parse(text) : undefined;
+  } catch {
+    data = undefined; // a proxy's HTML error page, say
+  }
   if (!res.ok) {
-    const err = new ApiError(res.status, data ?? { statusCode: res.status, error: 'internal_error', message: res.statusText });
-    if (res.status === 401 && token) onUnauthorized();
+    const err = new ApiError(res.status, (data as ApiErrorBody | undefined) ?? { statusCode: res.status, error: 'internal_error', message: res.statusText || `HTTP ${res.status}` });
+    // only a real 401 ends the session; an outage (503) keeps it
+    // after this call settles (signing out clears the query cache, which must not happen under a running query)
+    if (res.status === 401 && token) setTimeout(onUnauthorized, 0);
     throw err;
   }
   return data as T;

@@ -3,7 +3,21 @@ import { useQueryClient } from '@tanstack/react-query';
 import type { LoginRequest, SessionUser } from '@amberline/common';
 import { login as loginRequest } from '../features/auth/api/login';
 import { meQueryOptions, useMe } from '../features/auth/api/get-me';
-import { setUnauthorizedHandler, tokenStore } from './api-client';
+import { ApiError, setUnauthorizedHandler, tokenStore } from './api-client';
+
+/** The signed-in user as last confirmed by the server: kept through an outage, so a 503 does not sign anyone out. */
+const USER_KEY = 'amberline.user';
+const lastUser = {
+  get: (): SessionUser | null => {
+    try {
+      return JSON.parse(localStorage.getItem(USER_KEY) ?? 'null') as SessionUser | null;
+    } catch {
+      return null;
+    }
+  },
+  set: (u: SessionUser) => localStorage.setItem(USER_KEY, JSON.stringify(u)),
+  clear: () => localStorage.removeItem(USER_KEY),
+};
 
 type AuthState = {
   user: SessionUser | null;
@@ -20,6 +34,7 @@ export function AuthProvider({ children }: { children: ReactNode }) {
 
   const signOut = useCallback(() => {
     tokenStore.clear();
+    lastUser.clear();
     qc.clear();
     qc.setQueryData(meQueryOptions().queryKey, null as unknown as SessionUser);
   }, [qc]);
@@ -30,15 +45,21 @@ export function AuthProvider({ children }: { children: ReactNode }) {
     async (body: LoginRequest) => {
       const res = await loginRequest(body);
       tokenStore.set(res.accessToken);
+      lastUser.set(res.user);
       qc.setQueryData(meQueryOptions().queryKey, res.user);
       return res.user;
     },
     [qc],
   );
 
+  useEffect(() => {
+    if (me.data) lastUser.set(me.data);
+  }, [me.data]);
+  // the server could not be reached or answered 503: the session stands, the shell says the service is unavailable
+  const outage = me.isError && !(me.error instanceof ApiError && me.error.status < 500);
   const value = useMemo<AuthState>(
-    () => ({ user: tokenStore.get() ? me.data ?? null : null, loading: !!tokenStore.get() && me.isPending, signIn, signOut }),
-    [me.data, me.isPending, signIn, signOut],
+    () => ({ user: tokenStore.get() ? me.data ?? (outage ? lastUser.get() : null) : null, loading: !!tokenStore.get() && me.isPending, signIn, signOut }),
+    [me.data, me.isPending, outage, signIn, signOut],
   );
   return <AuthContext.Provider value={value}>{children}</AuthContext.Provider>;
 }

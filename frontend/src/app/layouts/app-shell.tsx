@@ -1,10 +1,11 @@
-import { Suspense, useMemo } from 'react';
-import { App as AntApp, Button, Grid, Layout, Menu, Space, Tag, Typography } from 'antd';
+import { Suspense, useEffect, useMemo, useState } from 'react';
+import { Alert, App as AntApp, Button, Grid, Layout, Menu, Space, Tag, Typography } from 'antd';
 import { Link, Outlet, useLocation } from 'react-router-dom';
 import { ROLE_LABELS } from '@amberline/common';
 import { BrandMark } from '../../components/brand-mark';
 import { PageSpinner } from '../../components/page-spinner';
 import { navigationFor } from '../navigation';
+import { onAvailability } from '../../lib/api-client';
 import { useAuth } from '../../lib/auth';
 
 export function AppShell() {
@@ -12,6 +13,8 @@ export function AppShell() {
   const location = useLocation();
   const screens = Grid.useBreakpoint();
   const items = useMemo(() => navigationFor(user?.role), [user?.role]);
+  const [unavailable, setUnavailable] = useState(false);
+  useEffect(() => onAvailability(setUnavailable), []);
   const selected = items
     .filter((i) => (i.path === '/' ? location.pathname === '/' : location.pathname.startsWith(i.path)))
     .map((i) => i.path);
@@ -50,6 +53,16 @@ export function AppShell() {
         )}
       </Layout.Header>
       <Layout.Content style={{ padding: screens.md ? 24 : 12 }}>
+        {unavailable && (
+          <Alert
+            type="error"
+            showIcon
+            style={{ marginBottom: 12 }}
+            data-testid="service-unavailable"
+            title="The service is unavailable for the moment"
+            description="You are still signed in and nothing was lost; what you sent may not have been saved. Try again in a minute."
+          />
+        )}
         <Suspense fallback={<PageSpinner />}>
           <Outlet />
         </Suspense>
