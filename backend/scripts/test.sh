@@ -16,6 +16,8 @@ bash backend/scripts/pg.sh start >/dev/null || { echo "0 passed, 1 failed"; exit
 bash backend/scripts/pg.sh recreate || { echo "0 passed, 1 failed"; exit 1; }
 export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT/$PGDB"
 export JWT_SECRET="test-secret-not-for-production" NODE_ENV=test
+# the tests stand behind a proxy on loopback: each test gives its own client address in X-Forwarded-For
+export TRUST_PROXY="${TRUST_PROXY:-loopback}"
 bash backend/scripts/build.sh || { echo "0 passed, 1 failed"; exit 1; }
 node backend/dist/database/migrate.js || { echo "0 passed, 1 failed"; exit 1; }
 source backend/scripts/fakes.sh
