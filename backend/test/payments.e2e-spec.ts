@@ -133,6 +133,33 @@ describe('permit fee payments', () => {
     expect(rows[0].n).toBe(1);
   });
 
+  it('a processor that stops answering leaves the attempt open (503); once it is back, a new attempt settles the old one first and charges once', async () => {
+    const move = await newMove();
+    const p = await issued(move);
+    const port = fake.port;
+    const restart = async () => {
+      fake = await startStripeFake({ port, webhookUrl: null, apiKey: 'sk_test_payments_spec', webhookSecret: SECRET, onEvent: (event: FakeEvent['event'], payload: string, header: string) => events.push({ event, payload, header }) });
+    };
+    await fake.close(); // the processor is down
+    const down = await pay(p.id);
+    expect(down.status).toBe(503);
+    const stuck = await t.ds.query(`SELECT id, status, attempt FROM permit_payments WHERE permit_id = $1`, [p.id]);
+    expect(stuck).toEqual([expect.objectContaining({ status: 'pending', attempt: 1 })]);
+    // still down: a new attempt cannot settle the open one, and says so (no second attempt is started)
+    const stillDown = await pay(p.id);
+    expect(stillDown.status).toBe(503);
+    expect(stillDown.body.message).toMatch(/attempt 1 stays open/);
+    await restart(); // back up, with no memory of the earlier calls
+    const again = await pay(p.id);
+    expect(again.status).toBe(201);
+    expect(again.body).toMatchObject({ attempt: 2, status: 'processing' });
+    const rows: { attempt: number; status: string }[] = await t.ds.query(`SELECT attempt, status FROM permit_payments WHERE permit_id = $1 ORDER BY attempt`, [p.id]);
+    expect(rows).toEqual([{ attempt: 1, status: 'canceled' }, { attempt: 2, status: 'processing' }]);
+    // at the processor: the first attempt's intent canceled, one charge
+    const intents = [...fake.state.paymentIntents.values()].filter((x) => (x as unknown as { metadata: { permitId: string } }).metadata.permitId === p.id);
+    expect(intents.map((x) => x.status).sort()).toEqual(['canceled', 'succeeded']);
+  });
+
   it('refuses to pay a permit not issued (409), without an actual fee (400), or with a bad request (400)', async () => {
     const move = await newMove();
     const p = await permitOf(move);

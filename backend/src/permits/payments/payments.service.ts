@@ -45,6 +45,9 @@ export class PaymentsService {
    * attempt (no second charge). A new attempt is allowed after a decline or failure, never after a payment.
    */
   async pay(permitId: string, dto: PayPermitDto, actor: SessionUser, now: Date): Promise<PaymentDto> {
+    // an earlier attempt left pending by a processor that did not answer is settled first (never two charges)
+    const stuck = await this.ds.manager.findOne(PermitPayment, { where: { permitId, status: 'pending' } });
+    if (stuck && stuck.clientKey !== dto.idempotencyKey) await this.reconcile(stuck, actor, now);
     const row = await this.ds.transaction(async (m) => {
       const permit = await m.findOne(Permit, { where: { id: permitId }, lock: { mode: 'pessimistic_write' } });
       if (!permit) throw new AppException(404, 'not_found', `No permit ${permitId}`);
@@ -78,16 +81,7 @@ export class PaymentsService {
     const permit = await this.ds.manager.findOneByOrFail(Permit, { id: payment.permitId });
     let intent: PaymentIntentLike;
     try {
-      const created = await this.stripe.paymentIntents.create(
-        {
-          amount: payment.amountCents,
-          currency: payment.currency,
-          automatic_payment_methods: { enabled: true, allow_redirects: 'never' },
-          description: `${permit.jurisdiction} permit fee`,
-          metadata: { paymentId: payment.id, permitId: permit.id, moveId: permit.moveId, jurisdiction: permit.jurisdiction, attempt: String(payment.attempt) },
-        },
-        { idempotencyKey: `${payment.idempotencyKey}-create` },
-      );
+      const created = await this.createIntent(payment, permit);
       await this.ds.manager.update(PermitPayment, { id: payment.id }, { stripePaymentIntentId: created.id });
       intent = await this.stripe.paymentIntents.confirm(created.id, { payment_method: payment.paymentMethod }, { idempotencyKey: `${payment.idempotencyKey}-confirm` });
     } catch (e) {
@@ -112,6 +106,60 @@ export class PaymentsService {
       await this.settle(payment.id, ['pending'], { status: 'failed', failureMessage: `payment ended as ${intent.status}` }, actor, 'failed', now);
     }
     return this.dto(payment);
+  }
+
+  /** The attempt's PaymentIntent, created once: the same key and the same parameters answer with the same intent. */
+  private createIntent(payment: PermitPayment, permit: Permit) {
+    return this.stripe.paymentIntents.create(
+      {
+        amount: payment.amountCents,
+        currency: payment.currency,
+        automatic_payment_methods: { enabled: true, allow_redirects: 'never' },
+        description: `${permit.jurisdiction} permit fee`,
+        metadata: { paymentId: payment.id, permitId: permit.id, moveId: permit.moveId, jurisdiction: permit.jurisdiction, attempt: String(payment.attempt) },
+      },
+      { idempotencyKey: `${payment.idempotencyKey}-create` },
+    );
+  }
+
+  /**
+   * Settles an attempt the processor never answered: its intent is looked up (or created again under the same
+   * key, which gives back the one the processor may have made) and then either taken as paid, or canceled so a
+   * new attempt can start. While the processor still does not answer, 503 and the attempt stays as it is.
+   */
+  private async reconcile(p: PermitPayment, actor: SessionUser, now: Date): Promise<void> {
+    const permit = await this.ds.manager.findOneByOrFail(Permit, { id: p.permitId });
+    let intent: PaymentIntentLike | null;
+    try {
+      if (p.stripePaymentIntentId) intent = await this.stripe.paymentIntents.retrieve(p.stripePaymentIntentId);
+      else {
+        intent = await this.createIntent(p, permit);
+        await this.ds.manager.update(PermitPayment, { id: p.id }, { stripePaymentIntentId: intent.id });
+      }
+    } catch (e) {
+      const err = e as { type?: string; code?: string; message?: string };
+      if (err.type === 'StripeInvalidRequestError' && err.code === 'resource_missing') intent = null;
+      else {
+        this.logger.warn(`reconciling payment ${p.id}: ${err.type ?? 'error'} ${err.message}`);
+        throw new AppException(503, 'service_unavailable', `The payment service still does not answer; attempt ${p.attempt} stays open until it does. Try again shortly`);
+      }
+    }
+    if (!intent) {
+      await this.settle(p.id, ['pending'], { status: 'failed', failureMessage: 'the payment service has no record of this attempt' }, actor, 'reconciled', now);
+    } else if (intent.status === 'succeeded' || intent.status === 'processing') {
+      await this.settle(p.id, ['pending'], { status: 'processing', stripeChargeId: chargeId(intent.latest_charge) }, actor, 'reconciled', now);
+    } else if (intent.status === 'canceled') {
+      await this.settle(p.id, ['pending'], { status: 'canceled', failureMessage: 'canceled at the payment service' }, actor, 'reconciled', now);
+    } else {
+      try {
+        await this.stripe.paymentIntents.cancel(intent.id, {}, { idempotencyKey: `${p.idempotencyKey}-cancel` });
+      } catch (e) {
+        const err = e as { type?: string; message?: string };
+        this.logger.warn(`canceling payment ${p.id}: ${err.type ?? 'error'} ${err.message}`);
+        throw new AppException(503, 'service_unavailable', `The payment service did not confirm canceling attempt ${p.attempt}; try again shortly`);
+      }
+      await this.settle(p.id, ['pending'], { status: 'canceled', failureMessage: 'not completed: the payment service did not answer; canceled before a new attempt' }, actor, 'reconciled', now);
+    }
   }
 
   /** Moves a payment on from one of `from` statuses (so a late or repeated event changes nothing twice). */
