@@ -1,5 +1,15 @@
 import type { INestApplication } from '@nestjs/common';
 import helmet from 'helmet';
+import { bodyParsers } from './core/body-parsers';
+import { answerMiddlewareError } from './core/filters/api-exception.filter';
+
+/** TRUST_PROXY as Express reads it: a hop count, or addresses / subnets / names; false when unset. */
+export function trustProxySetting(raw: string | undefined): boolean | number | string {
+  const v = raw?.trim();
+  if (!v || v === 'false') return false;
+  if (/^\d+$/.test(v)) return Number(v);
+  return v;
+}
 
 /** Settings shared by the server and the tests' app. */
 export function configureApp(app: INestApplication): void {
@@ -19,7 +29,12 @@ export function configureApp(app: INestApplication): void {
       },
     }),
   );
-  // a reverse proxy on this machine may pass the client address along
-  app.getHttpAdapter().getInstance().set('trust proxy', 'loopback');
+  // the body parsers, then at once the answer to a body they refuse (400, 413 or 415 naming the part at fault):
+  // an error passed further on would reach the front end's static files, which answer anything under /api with 404
+  for (const parser of bodyParsers()) app.use(parser);
+  app.use(answerMiddlewareError);
+  // the client address (sign-in limits) comes from X-Forwarded-For only when a proxy is configured: TRUST_PROXY
+  // names it (e.g. "loopback", "10.0.0.0/8" or a hop count); without it the header is ignored
+  app.getHttpAdapter().getInstance().set('trust proxy', trustProxySetting(process.env.TRUST_PROXY));
   app.enableShutdownHooks();
 }

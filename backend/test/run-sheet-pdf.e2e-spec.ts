@@ -180,10 +180,16 @@ describe('run-sheet PDF', () => {
     expect(new Set(keys).size).toBe(keys.length);
     const concatenated = states.reduce((n, j) => n + j.markings.flags.length + j.markings.signs.length + j.markings.lamps.length + j.markings.escortSigns.length + j.markings.reflectors.length, 0);
     expect(lines.length).toBeLessThan(concatenated);
-    expect(lines.filter((l) => l.kind === 'lamp').map((l) => [l.where, l.onlyIn])).toEqual([
+    // the federal side-projection lamps once for both states; Colorado's own night-travel lamps for a load over
+    // 8 ft 6 in wide (2 CCR 601-4 Rule 408.3: one at the front of the vehicle, two on the extreme rear) in CO only
+    const lampLines = lines.filter((l) => l.kind === 'lamp').map((l) => [l.where, l.onlyIn]);
+    expect(lampLines).toHaveLength(4);
+    expect(lampLines).toEqual(expect.arrayContaining([
       ['front of the side projection', null],
       ['rear of the side projection', null],
-    ]);
+      ['front of the vehicle', 'CO'],
+      ['extreme rear', 'CO'],
+    ]));
 
     // the PDF prints exactly these lines, each once
     const section = flat(text).split('Flags, signs and lamps')[1].split('Securement')[0];

@@ -3,6 +3,7 @@ export * from './moves/stages';
 export * from './moves/schedule';
 export * from './errors/error-codes';
 export * from './validation/limits';
+export * from './validation/dates';
 export * from './types/auth';
 export * from './engine';
 export * from './types/fleet';

@@ -56,6 +56,7 @@ describe('a topic not on file reads as such, never as none', () => {
   it('the move page shows escorts and the fee for GA as not on file, and lists them among the open questions', async () => {
     const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
     await signIn(page, 'dispatcher@amberline.example');
+    await page.getByTestId('current-role').waitFor(); // signed in before the next page is asked for
     await page.goto(`${BASE_URL}/moves/${move.id}`);
     await page.getByTestId('move-page').waitFor();
     const ga = page.getByTestId('jurisdiction-GA');
@@ -78,6 +79,7 @@ describe('a topic not on file reads as such, never as none', () => {
   it('the driver’s run sheet says escorts are not on file for GA and lists the open questions', async () => {
     const page = await browser.newPage({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
     await signIn(page, 'driver@amberline.example');
+    await page.getByTestId('run-sheets-page').or(page.getByTestId('current-role')).first().waitFor();
     await page.goto(`${BASE_URL}/run-sheets/${move.id}`);
     await page.getByTestId('run-sheet-page').waitFor();
     const escorts = await page.getByTestId('section-escorts').textContent();

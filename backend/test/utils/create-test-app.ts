@@ -1,4 +1,5 @@
 import type { INestApplication } from '@nestjs/common';
+import { NestFactory } from '@nestjs/core';
 import { Test, type TestingModuleBuilder } from '@nestjs/testing';
 import { DataSource } from 'typeorm';
 import type { Role } from '@amberline/common';
@@ -29,6 +30,22 @@ export async function createTestApp(override: (b: TestingModuleBuilder) => Testi
   const app = moduleRef.createNestApplication({ rawBody: true, logger: ['error', 'warn'] });
   configureApp(app);
   await app.init();
+  return testAppOf(app);
+}
+
+/**
+ * Boots the app as the server does (NestFactory, as in main.ts): with the built front end served next to the API,
+ * as under `npm start`. (A testing module's providers are made before the HTTP adapter exists, so createTestApp's
+ * app never serves the front end.)
+ */
+export async function createServedTestApp(): Promise<TestApp> {
+  const app = await NestFactory.create(AppModule, { rawBody: true, logger: ['error', 'warn'] });
+  configureApp(app);
+  await app.init();
+  return testAppOf(app);
+}
+
+function testAppOf(app: INestApplication): TestApp {
   const ds = app.get(DataSource);
   const http = () => request(app.getHttpServer());
   const signedIn = async (input: SeedUserInput = {}) => {

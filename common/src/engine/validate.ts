@@ -1,4 +1,5 @@
 /** Input validation: negative, NaN and absurd values are rejected with a RangeError naming the field. */
+import { calendarDate } from '../validation/dates';
 
 export type NumberBounds = {
   min?: number;
@@ -48,19 +49,13 @@ export const checkLengthIn = (field: string, v: unknown, min = 0): number =>
 export const checkWeightLb = (field: string, v: unknown, max: number = ABSURD.weightLb): number =>
   checkNumber(field, v, { min: 0, max, unit: 'lb' });
 
-const DATE_RE = /^(\d{4})-(\d{2})-(\d{2})$/;
-
-/** Parses `YYYY-MM-DD` strictly; RangeError otherwise. */
+/** Parses `YYYY-MM-DD` strictly (a real calendar day, between 1900 and 2200); RangeError otherwise. */
 export function parseIsoDate(field: string, value: unknown): { y: number; m: number; d: number } {
   if (typeof value !== 'string') throw new RangeError(`${field} must be a YYYY-MM-DD date string; got ${String(value)}`);
-  const match = DATE_RE.exec(value);
-  if (!match) throw new RangeError(`${field} must be a YYYY-MM-DD date string; got "${value}"`);
-  const y = Number(match[1]);
-  const m = Number(match[2]);
-  const d = Number(match[3]);
-  const probe = new Date(Date.UTC(y, m - 1, d));
-  if (y < 1900 || y > 2200 || probe.getUTCMonth() !== m - 1 || probe.getUTCDate() !== d) {
+  if (!/^\d{4}-\d{2}-\d{2}$/.test(value)) throw new RangeError(`${field} must be a YYYY-MM-DD date string; got "${value}"`);
+  const date = calendarDate(value);
+  if (!date || date.y < 1900 || date.y > 2200) {
     throw new RangeError(`${field} is not a real calendar date between 1900 and 2200; got "${value}"`);
   }
-  return { y, m, d };
+  return date;
 }

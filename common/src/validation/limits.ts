@@ -5,4 +5,6 @@ export const LIMITS = {
   passwordMin: 8,
   passwordMax: 128,
   pageSizeMax: 100,
+  /** Highest page number a list accepts (keeps the row offset a small whole number). */
+  pageMax: 100_000,
 } as const;

@@ -1,14 +1,14 @@
-import { Transform, Type } from 'class-transformer';
+import { Transform } from 'class-transformer';
 import {
-  ArrayMaxSize, ArrayMinSize, IsArray, IsIn, IsInt, IsOptional, IsString, IsUUID, Length, Matches, Max, MaxLength, Min, ValidateNested,
+  ArrayMaxSize, ArrayMinSize, IsArray, IsIn, IsInt, IsOptional, IsString, IsUUID, Length, Matches, Max, MaxLength, Min,
 } from 'class-validator';
 import {
   ESCORT_DECISIONS, ESCORT_POSITIONS, JURISDICTION_CODES,
   type CancelEscortBookingRequest, type CreateEscortBookingRequest, type EscortAnswer, type EscortDecision, type EscortPosition,
 } from '@amberline/common';
+import { IsCalendarDate, Nested } from '../../core/validators';
 
 const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
-const DATE = /^\d{4}-\d{2}-\d{2}$/;
 
 export class CreateEscortBookingDto implements CreateEscortBookingRequest {
   @IsUUID('all', { message: 'vendorId must be a vendor id' }) vendorId: string;
@@ -38,9 +38,9 @@ export class EscortAnswerDto implements EscortAnswer {
   @IsOptional() @Transform(trim) @IsString() @MaxLength(120) operatorName?: string;
   @IsOptional() @Transform(trim) @IsString() @MaxLength(120) vehicle?: string;
   @IsOptional() @Transform(trim) @IsString() @Matches(/^[0-9+()\-. ]{7,40}$/, { message: 'phone must be 7–40 digits, spaces, + ( ) - .' }) phone?: string;
-  @IsOptional() @IsArray() @ArrayMaxSize(49) @ValidateNested({ each: true }) @Type(() => GivenCertificationDto) certifications?: GivenCertificationDto[];
+  @IsOptional() @IsArray() @ArrayMaxSize(49) @Nested(() => GivenCertificationDto, { each: true }) certifications?: GivenCertificationDto[];
   @IsOptional() @Transform(trim) @IsString() @MaxLength(1000) reason?: string;
-  @IsOptional() @Matches(DATE, { message: 'proposedStart must be a date, YYYY-MM-DD' }) proposedStart?: string;
-  @IsOptional() @Matches(DATE, { message: 'proposedEnd must be a date, YYYY-MM-DD' }) proposedEnd?: string;
+  @IsOptional() @IsCalendarDate({ message: 'proposedStart must be a date, YYYY-MM-DD' }) proposedStart?: string;
+  @IsOptional() @IsCalendarDate({ message: 'proposedEnd must be a date, YYYY-MM-DD' }) proposedEnd?: string;
   @IsOptional() @Transform(trim) @IsString() @MaxLength(1000) note?: string;
 }

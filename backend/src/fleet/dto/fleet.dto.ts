@@ -1,10 +1,10 @@
-import { Type } from 'class-transformer';
 import {
-  ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsIn, IsInt, IsNumber, IsOptional, IsString, Length, Max, MaxLength, Min, ValidateNested,
+  ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsIn, IsInt, IsNumber, IsOptional, IsString, Length, Max, MaxLength, Min,
 } from 'class-validator';
 import {
   ANCHOR_KINDS, TRAILER_TYPES, type AnchorKind, type AnchorPoint, type GaugeCalibrationPoint, type TractorInput, type TrailerInput, type TrailerType,
 } from '@amberline/common';
+import { Nested } from '../../core/validators';
 
 export class FifthWheelRangeDto {
   @IsNumber() @Min(-10) @Max(10) min: number;
@@ -18,7 +18,7 @@ export class TractorInputDto implements TractorInput {
   @IsNumber() @Min(1000) @Max(60000) driveTareLb: number;
   @IsNumber() @Min(8) @Max(35) wheelbaseFt: number;
   @IsNumber() @Min(-5) @Max(5) fifthWheelAheadOfDriveFt: number;
-  @IsOptional() @ValidateNested() @Type(() => FifthWheelRangeDto) fifthWheelRangeFt?: FifthWheelRangeDto | null;
+  @IsOptional() @Nested(() => FifthWheelRangeDto) fifthWheelRangeFt?: FifthWheelRangeDto | null;
   @IsNumber() @Min(0) @Max(240) bumperToSteerIn: number;
   @IsNumber() @Min(60) @Max(120) widthIn: number;
   @IsNumber() @Min(60) @Max(170) heightIn: number;
@@ -55,15 +55,15 @@ export class TrailerInputDto implements TrailerInput {
   @IsNumber() @Min(240) @Max(2400) lengthIn: number;
   @IsNumber() @Min(60) @Max(200) widthIn: number;
   @IsOptional() @IsNumber() @Min(0) @Max(200) heightIn?: number | null;
-  @IsArray() @ArrayMinSize(1) @ArrayMaxSize(5) @ValidateNested({ each: true }) @Type(() => DeckSectionDto) decks: DeckSectionDto[];
+  @IsArray() @ArrayMinSize(1) @ArrayMaxSize(5) @Nested(() => DeckSectionDto, { each: true }) decks: DeckSectionDto[];
   @IsNumber() @Min(2000) @Max(120000) tareLb: number;
   @IsNumber() @Min(0) @Max(200) tareCgFromKingpinFt: number;
   @IsNumber() @Min(0) @Max(600) kingpinFromFrontIn: number;
   @IsArray() @ArrayMinSize(1) @ArrayMaxSize(13) @IsNumber({}, { each: true }) axleOffsetsFt: number[];
   @IsNumber() @Min(5) @Max(200) axleGroupFromKingpinFt: number;
-  @IsOptional() @ValidateNested() @Type(() => SliderRangeDto) slider?: SliderRangeDto | null;
-  @IsArray() @ArrayMaxSize(10) @ValidateNested({ each: true }) @Type(() => AnchorPointDto) anchorPoints: AnchorPointDto[];
-  @IsArray() @ArrayMaxSize(20) @ValidateNested({ each: true }) @Type(() => GaugePointDto) gaugeCalibration: GaugePointDto[];
+  @IsOptional() @Nested(() => SliderRangeDto) slider?: SliderRangeDto | null;
+  @IsArray() @ArrayMaxSize(10) @Nested(() => AnchorPointDto, { each: true }) anchorPoints: AnchorPointDto[];
+  @IsArray() @ArrayMaxSize(20) @Nested(() => GaugePointDto, { each: true }) gaugeCalibration: GaugePointDto[];
   @IsOptional() @IsString() @MaxLength(40) tireSize?: string | null;
 }
 

@@ -1,11 +1,12 @@
-import { Type } from 'class-transformer';
 import {
-  ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsIn, IsInt, IsISO8601, IsNumber, IsOptional, IsString, IsUUID, Length, Matches, Max, MaxLength, Min, ValidateIf, ValidateNested,
+  ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsIn, IsInt, IsNumber, IsOptional, IsString, IsUUID, Length, Matches, Max, MaxLength, Min, ValidateIf,
 } from 'class-validator';
 import {
-  ANCHOR_KINDS, LIMITS, MOVE_STAGES, WEIGHT_SOURCES,
+  ANCHOR_KINDS, MOVE_STAGES, WEIGHT_SOURCES,
   type AnchorKind, type MoveArticle, type MoveInput, type MoveStage, type MoveTiedown, type RoadType, type RouteSegmentInput, type StageChangeRequest, type ReassessRequest, type ReopenRequest, type TiedownPath, type UpdateMoveRequest, type WeightSource,
 } from '@amberline/common';
+import { PageQuery } from '../../core/page-query.dto';
+import { IsCalendarDate, Nested, Omittable } from '../../core/validators';
 
 const ROAD_TYPES: RoadType[] = ['two-lane', 'multilane', 'interstate'];
 const PATHS: TiedownPath[] = ['direct', 'same-side', 'side-to-side'];
@@ -38,7 +39,7 @@ export class ArticleDto implements MoveArticle {
   @IsBoolean() blockedForward: boolean;
   @IsOptional() @IsBoolean() heavyEquipment?: boolean;
   @IsOptional() @IsBoolean() sharpEdges?: boolean;
-  @IsArray() @ArrayMaxSize(40) @ValidateNested({ each: true }) @Type(() => TiedownDto) tiedowns: TiedownDto[];
+  @IsArray() @ArrayMaxSize(40) @Nested(() => TiedownDto, { each: true }) tiedowns: TiedownDto[];
 }
 
 export class RouteSegmentDto implements RouteSegmentInput {
@@ -57,14 +58,14 @@ export class CreateMoveDto implements MoveInput {
   @IsString() @Length(1, 120) customer: string;
   @IsOptional() @IsString() @MaxLength(60) customerRef?: string;
   @IsString() @Length(1, 200) commodity: string;
-  @IsArray() @ArrayMinSize(1) @ArrayMaxSize(10) @ValidateNested({ each: true }) @Type(() => ArticleDto) articles: ArticleDto[];
+  @IsArray() @ArrayMinSize(1) @ArrayMaxSize(10) @Nested(() => ArticleDto, { each: true }) articles: ArticleDto[];
   @IsUUID('4', { message: 'tractorId must be the id of a tractor' }) tractorId: string;
   @IsUUID('4', { message: 'trailerId must be the id of a trailer' }) trailerId: string;
   @IsOptional() @IsNumber() @Min(0) @Max(200) sliderSettingFt?: number | null;
-  @IsArray() @ArrayMinSize(1) @ArrayMaxSize(30) @ValidateNested({ each: true }) @Type(() => RouteSegmentDto) route: RouteSegmentDto[];
+  @IsArray() @ArrayMinSize(1) @ArrayMaxSize(30) @Nested(() => RouteSegmentDto, { each: true }) route: RouteSegmentDto[];
   @IsString() @Length(1, 200) origin: string;
   @IsString() @Length(1, 200) destination: string;
-  @IsISO8601({ strict: true }, { message: 'requestedDeparture must be a YYYY-MM-DD date' }) @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'requestedDeparture must be a YYYY-MM-DD date' }) requestedDeparture: string;
+  @IsCalendarDate({ message: 'requestedDeparture must be a YYYY-MM-DD date' }) requestedDeparture: string;
   @IsInt() @Min(1) @Max(30) travelDays: number;
   @IsOptional() @ValidateIf((_, v) => v !== null) @IsInt({ message: 'dailyMiles must be whole miles' }) @Min(20, { message: 'dailyMiles must be at least 20' }) @Max(1000, { message: 'dailyMiles must not exceed 1,000' }) dailyMiles?: number | null;
   @IsOptional() @IsUUID('4', { message: 'driverId must be the id of a driver' }) driverId?: string | null;
@@ -73,26 +74,24 @@ export class CreateMoveDto implements MoveInput {
 
 export class UpdateMoveDto implements UpdateMoveRequest {
   @IsInt() @Min(1) version: number;
-  @IsOptional() @IsString() @Length(1, 120) customer?: string;
+  @Omittable() @IsString() @Length(1, 120) customer?: string;
   @IsOptional() @IsString() @MaxLength(60) customerRef?: string;
-  @IsOptional() @IsString() @Length(1, 200) commodity?: string;
-  @IsOptional() @IsArray() @ArrayMinSize(1) @ArrayMaxSize(10) @ValidateNested({ each: true }) @Type(() => ArticleDto) articles?: ArticleDto[];
-  @IsOptional() @IsUUID('4', { message: 'tractorId must be the id of a tractor' }) tractorId?: string;
-  @IsOptional() @IsUUID('4', { message: 'trailerId must be the id of a trailer' }) trailerId?: string;
+  @Omittable() @IsString() @Length(1, 200) commodity?: string;
+  @Omittable() @IsArray() @ArrayMinSize(1) @ArrayMaxSize(10) @Nested(() => ArticleDto, { each: true }) articles?: ArticleDto[];
+  @Omittable() @IsUUID('4', { message: 'tractorId must be the id of a tractor' }) tractorId?: string;
+  @Omittable() @IsUUID('4', { message: 'trailerId must be the id of a trailer' }) trailerId?: string;
   @IsOptional() @IsNumber() @Min(0) @Max(200) sliderSettingFt?: number | null;
-  @IsOptional() @IsArray() @ArrayMinSize(1) @ArrayMaxSize(30) @ValidateNested({ each: true }) @Type(() => RouteSegmentDto) route?: RouteSegmentDto[];
-  @IsOptional() @IsString() @Length(1, 200) origin?: string;
-  @IsOptional() @IsString() @Length(1, 200) destination?: string;
-  @IsOptional() @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'requestedDeparture must be a YYYY-MM-DD date' }) requestedDeparture?: string;
-  @IsOptional() @IsInt() @Min(1) @Max(30) travelDays?: number;
+  @Omittable() @IsArray() @ArrayMinSize(1) @ArrayMaxSize(30) @Nested(() => RouteSegmentDto, { each: true }) route?: RouteSegmentDto[];
+  @Omittable() @IsString() @Length(1, 200) origin?: string;
+  @Omittable() @IsString() @Length(1, 200) destination?: string;
+  @Omittable() @IsCalendarDate({ message: 'requestedDeparture must be a YYYY-MM-DD date' }) requestedDeparture?: string;
+  @Omittable() @IsInt() @Min(1) @Max(30) travelDays?: number;
   @IsOptional() @ValidateIf((_, v) => v !== null) @IsInt({ message: 'dailyMiles must be whole miles' }) @Min(20, { message: 'dailyMiles must be at least 20' }) @Max(1000, { message: 'dailyMiles must not exceed 1,000' }) dailyMiles?: number | null;
   @IsOptional() @IsUUID('4', { message: 'driverId must be the id of a driver' }) driverId?: string | null;
   @IsOptional() @IsString() @MaxLength(2000) notes?: string;
 }
 
-export class ListMovesQuery {
-  @IsOptional() @Type(() => Number) @IsInt() @Min(1) page = 1;
-  @IsOptional() @Type(() => Number) @IsInt() @Min(1) @Max(LIMITS.pageSizeMax) pageSize = 20;
+export class ListMovesQuery extends PageQuery {
   @IsOptional() @IsIn(MOVE_STAGES as unknown as string[]) stage?: MoveStage;
   @IsOptional() @IsString() @MaxLength(100) search?: string;
   @IsOptional() @IsIn(['departure', '-departure', 'updated']) sort: 'departure' | '-departure' | 'updated' = 'departure';

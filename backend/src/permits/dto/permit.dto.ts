@@ -1,13 +1,12 @@
-import { Type } from 'class-transformer';
 import {
-  ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsIn, IsInt, IsISO8601, IsNumber, IsObject, IsOptional, IsString, IsUUID, Length, Matches, Max, MaxLength, Min, ValidateIf, ValidateNested,
+  ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsIn, IsInt, IsNumber, IsObject, IsOptional, IsString, IsUUID, Length, Matches, Max, MaxLength, Min, ValidateIf,
 } from 'class-validator';
 import {
-  LIMITS, PAYMENT_STATUSES, PERMIT_SORTS, PERMIT_STATUSES, PERMIT_TYPES,
+  PAYMENT_STATUSES, PERMIT_SORTS, PERMIT_STATUSES, PERMIT_TYPES,
   type AssignPermitsRequest, type PaymentStatus, type PayPermitRequest, type PermitConditions, type PermitTravelTerms, type PermitQueueStatus, type PermitSort, type PermitStatus, type PermitType, type UpdatePermitRequest,
 } from '@amberline/common';
-
-const LOCAL_DATE_TIME = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/;
+import { PageQuery } from '../../core/page-query.dto';
+import { IsDateOrDateTime, IsLocalDateTime, MaxDecimals, Nested, Omittable } from '../../core/validators';
 
 export class PermitConditionsDto implements PermitConditions {
   @IsOptional() @IsInt() @Min(0) @Max(6) escortsFront?: number;
@@ -23,19 +22,20 @@ export class PermitConditionsDto implements PermitConditions {
 
 export class UpdatePermitDto implements UpdatePermitRequest {
   @IsInt() @Min(1) version: number;
-  @IsOptional() @IsIn(PERMIT_STATUSES as unknown as string[], { message: `status must be one of ${PERMIT_STATUSES.join(', ')}` }) status?: PermitStatus;
+  @Omittable() @IsIn(PERMIT_STATUSES as unknown as string[], { message: `status must be one of ${PERMIT_STATUSES.join(', ')}` }) status?: PermitStatus;
   @IsOptional() @IsString() @Length(1, 500) reason?: string;
-  @IsOptional() @IsIn(PERMIT_TYPES as unknown as string[], { message: `permitType must be one of ${PERMIT_TYPES.join(', ')}` }) permitType?: PermitType;
+  @Omittable() @IsIn(PERMIT_TYPES as unknown as string[], { message: `permitType must be one of ${PERMIT_TYPES.join(', ')}` }) permitType?: PermitType;
   @IsOptional() @ValidateIf((_, v) => v !== null) @IsString() @Matches(/^[A-Za-z0-9][A-Za-z0-9 ./#-]{0,59}$/, { message: 'permitNumber must be 1–60 letters, digits, spaces or . / # -' }) permitNumber?: string | null;
-  @IsOptional() @ValidateIf((_, v) => v !== null) @IsISO8601({ strict: true }, { message: 'issuedAt must be an ISO date and time' }) issuedAt?: string | null;
-  @IsOptional() @ValidateIf((_, v) => v !== null) @Matches(LOCAL_DATE_TIME, { message: 'validFrom must be a local date and time, YYYY-MM-DDTHH:mm' }) validFrom?: string | null;
-  @IsOptional() @ValidateIf((_, v) => v !== null) @Matches(LOCAL_DATE_TIME, { message: 'validTo must be a local date and time, YYYY-MM-DDTHH:mm' }) validTo?: string | null;
+  @IsOptional() @ValidateIf((_, v) => v !== null) @IsDateOrDateTime({ message: 'issuedAt must be an ISO date and time with its offset (2026-12-01T14:30:00Z) or a date (YYYY-MM-DD)' }) issuedAt?: string | null;
+  @IsOptional() @ValidateIf((_, v) => v !== null) @IsLocalDateTime({ message: 'validFrom must be a local date and time, YYYY-MM-DDTHH:mm' }) validFrom?: string | null;
+  @IsOptional() @ValidateIf((_, v) => v !== null) @IsLocalDateTime({ message: 'validTo must be a local date and time, YYYY-MM-DDTHH:mm' }) validTo?: string | null;
   @IsOptional() @ValidateIf((_, v) => v !== null) @IsString() @MaxLength(2000) routeText?: string | null;
-  @IsOptional() @ValidateNested() @Type(() => PermitConditionsDto) conditions?: PermitConditionsDto;
+  @Omittable() @Nested(() => PermitConditionsDto) conditions?: PermitConditionsDto;
   @IsOptional() @ValidateIf((_, v) => v !== null) @IsString() @MaxLength(4000) conditionsText?: string | null;
   @IsOptional()
   @ValidateIf((_, v) => v !== null)
-  @IsNumber({ maxDecimalPlaces: 2 }, { message: 'actualFeeUsd must be an amount in dollars with at most 2 decimals' })
+  @IsNumber({}, { message: 'actualFeeUsd must be an amount in dollars with at most 2 decimals' })
+  @MaxDecimals(2, { message: 'actualFeeUsd must be an amount in dollars with at most 2 decimals' })
   @Min(0.5, { message: 'actualFeeUsd must be more than $0 (at least $0.50)' })
   @Max(100000, { message: 'actualFeeUsd must not exceed $100,000' })
   actualFeeUsd?: number | null;
@@ -43,12 +43,10 @@ export class UpdatePermitDto implements UpdatePermitRequest {
   @IsOptional() @ValidateIf((_, v) => v !== null) @IsString() @MaxLength(4000) notes?: string | null;
 }
 
-export class ListPermitsQuery {
-  @IsOptional() @Type(() => Number) @IsInt() @Min(1) page = 1;
-  @IsOptional() @Type(() => Number) @IsInt() @Min(1) @Max(LIMITS.pageSizeMax) pageSize = 20;
+export class ListPermitsQuery extends PageQuery {
   @IsOptional() @IsIn(['open', ...PERMIT_STATUSES], { message: `status must be open or one of ${PERMIT_STATUSES.join(', ')}` }) status?: PermitQueueStatus;
   @IsOptional() @Matches(/^[A-Z]{2}$/, { message: 'jurisdiction must be a two-letter state code' }) jurisdiction?: string;
-  @IsOptional() @Matches(/^(me|none|[0-9a-f-]{36})$/i, { message: 'assignee must be a user id, me or none' }) assignee?: string;
+  @IsOptional() @ValidateIf((_, v) => v !== 'me' && v !== 'none') @IsUUID('4', { message: 'assignee must be a user id, me or none' }) assignee?: string;
   @IsOptional() @IsUUID('4', { message: 'moveId must be the id of a move' }) moveId?: string;
   @IsOptional() @IsIn(PERMIT_SORTS as unknown as string[], { message: `sort must be one of ${PERMIT_SORTS.join(', ')}` }) sort: PermitSort = 'urgency';
 }
@@ -67,9 +65,7 @@ export class RefundPermitDto {
   @IsString() @Length(1, 500) reason: string;
 }
 
-export class ListPaymentsQuery {
-  @IsOptional() @Type(() => Number) @IsInt() @Min(1) page = 1;
-  @IsOptional() @Type(() => Number) @IsInt() @Min(1) @Max(LIMITS.pageSizeMax) pageSize = 20;
+export class ListPaymentsQuery extends PageQuery {
   @IsOptional() @IsUUID('4', { message: 'moveId must be the id of a move' }) moveId?: string;
   @IsOptional() @IsIn(PAYMENT_STATUSES as unknown as string[], { message: `status must be one of ${PAYMENT_STATUSES.join(', ')}` }) status?: PaymentStatus;
   @IsOptional() @Matches(/^[A-Z]{2}$/, { message: 'jurisdiction must be a two-letter state code' }) jurisdiction?: string;

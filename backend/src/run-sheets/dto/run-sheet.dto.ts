@@ -1,6 +1,6 @@
-import { Type } from 'class-transformer';
-import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsNumber, IsOptional, IsString, Length, Max, Min, ValidateNested } from 'class-validator';
+import { ArrayMaxSize, IsArray, IsBoolean, IsIn, IsNumber, IsOptional, IsString, Length, Max, Min } from 'class-validator';
 import type { AcknowledgeRequest, DepartureChecksRequest, GaugeReading, OverrideChecksRequest, ScaleWeight } from '@amberline/common';
+import { Nested } from '../../core/validators';
 
 export class GaugeReadingDto implements GaugeReading {
   @IsIn(['trailer']) group: 'trailer';
@@ -25,8 +25,8 @@ export class DepartureChecksDtoIn implements DepartureChecksRequest {
   @IsBoolean() tiresInflated: boolean;
   @IsBoolean() markingsInPlace: boolean;
   @IsBoolean() permitsOnBoard: boolean;
-  @IsArray() @ArrayMaxSize(4) @ValidateNested({ each: true }) @Type(() => GaugeReadingDto) gaugeReadings: GaugeReadingDto[];
-  @IsOptional() @IsArray() @ArrayMaxSize(4) @ValidateNested({ each: true }) @Type(() => ScaleWeightDto) scaleWeights?: ScaleWeightDto[];
+  @IsArray() @ArrayMaxSize(4) @Nested(() => GaugeReadingDto, { each: true }) gaugeReadings: GaugeReadingDto[];
+  @IsOptional() @IsArray() @ArrayMaxSize(4) @Nested(() => ScaleWeightDto, { each: true }) scaleWeights?: ScaleWeightDto[];
 }
 
 export class AcknowledgeDto implements AcknowledgeRequest {

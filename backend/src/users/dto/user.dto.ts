@@ -1,7 +1,8 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
-import { IsBoolean, IsEmail, IsIn, IsInt, IsOptional, IsString, Length, Max, MaxLength, Min } from 'class-validator';
+import { IsBoolean, IsEmail, IsIn, IsOptional, IsString, Length, MaxLength } from 'class-validator';
 import { LIMITS, ROLES, type CreateUserRequest, type Role, type UpdateUserRequest, type UserDto } from '@amberline/common';
+import { PageQuery } from '../../core/page-query.dto';
+import { Omittable } from '../../core/validators';
 import type { User } from '../entities/user.entity';
 
 export class CreateUserDto implements CreateUserRequest {
@@ -19,23 +20,17 @@ export class CreateUserDto implements CreateUserRequest {
 }
 
 export class UpdateUserDto implements UpdateUserRequest {
-  @ApiPropertyOptional() @IsOptional() @IsString() @Length(1, LIMITS.nameMax)
+  @ApiPropertyOptional() @Omittable() @IsString() @Length(1, LIMITS.nameMax)
   name?: string;
 
-  @ApiPropertyOptional({ enum: ROLES }) @IsOptional() @IsIn(ROLES as unknown as string[], { message: `role must be one of ${ROLES.join(', ')}` })
+  @ApiPropertyOptional({ enum: ROLES }) @Omittable() @IsIn(ROLES as unknown as string[], { message: `role must be one of ${ROLES.join(', ')}` })
   role?: Role;
 
-  @ApiPropertyOptional() @IsOptional() @IsBoolean()
+  @ApiPropertyOptional() @Omittable() @IsBoolean()
   active?: boolean;
 }
 
-export class ListUsersQuery {
-  @IsOptional() @Type(() => Number) @IsInt() @Min(1)
-  page = 1;
-
-  @IsOptional() @Type(() => Number) @IsInt() @Min(1) @Max(LIMITS.pageSizeMax)
-  pageSize = 20;
-
+export class ListUsersQuery extends PageQuery {
   @IsOptional() @IsIn(ROLES as unknown as string[])
   role?: Role;
 

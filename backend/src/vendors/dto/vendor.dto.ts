@@ -1,13 +1,13 @@
-import { Transform, Type } from 'class-transformer';
+import { Transform } from 'class-transformer';
 import {
-  ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsDefined, IsEmail, IsIn, IsInt, IsNumber, IsOptional, IsString, Length, Matches, Max, MaxLength, Min, ValidateNested,
+  ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsDefined, IsEmail, IsIn, IsInt, IsNumber, IsOptional, IsString, Length, Matches, Max, MaxLength, Min,
 } from 'class-validator';
 import {
   JURISDICTION_CODES, LIMITS, RATE_BASES, type EscortCertification, type EscortEquipment, type EscortOperator, type EscortVehicle, type RateBasis,
   type UpdateVendorRequest, type VendorInput, type VendorInsurance, type VendorRates,
 } from '@amberline/common';
+import { IsCalendarDate, Nested } from '../../core/validators';
 
-const DATE = /^\d{4}-\d{2}-\d{2}$/;
 const dateMsg = (f: string) => ({ message: `${f} must be a date, YYYY-MM-DD` });
 const STATE_MSG = { each: true, message: 'each state must be a postal code of the contiguous US or DC, e.g. TX' };
 const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
@@ -15,13 +15,13 @@ const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? val
 export class CertificationDto implements EscortCertification {
   @IsIn(JURISDICTION_CODES, { message: 'state must be a postal code of the contiguous US or DC, e.g. TX' }) state: string;
   @Transform(trim) @IsString() @Length(1, 60) number: string;
-  @Matches(DATE, dateMsg('expires')) expires: string;
+  @IsCalendarDate(dateMsg('expires')) expires: string;
 }
 
 export class OperatorDto implements EscortOperator {
   @Transform(trim) @IsString() @Length(1, 120) name: string;
   @IsOptional() @Transform(trim) @IsString() @MaxLength(40) phone?: string;
-  @IsArray() @ArrayMaxSize(60) @ValidateNested({ each: true }) @Type(() => CertificationDto) certifications: CertificationDto[];
+  @IsArray() @ArrayMaxSize(60) @Nested(() => CertificationDto, { each: true }) certifications: CertificationDto[];
 }
 
 export class EquipmentDto implements EscortEquipment {
@@ -34,7 +34,7 @@ export class EquipmentDto implements EscortEquipment {
 export class VehicleDto implements EscortVehicle {
   @Transform(trim) @IsString() @Length(1, 80) label: string;
   @IsOptional() @Transform(trim) @IsString() @MaxLength(20) plate?: string;
-  @IsDefined({ message: 'equipment: say which of height pole, amber lights, signs and flags the vehicle carries' }) @ValidateNested() @Type(() => EquipmentDto) equipment: EquipmentDto;
+  @IsDefined({ message: 'equipment: say which of height pole, amber lights, signs and flags the vehicle carries' }) @Nested(() => EquipmentDto) equipment: EquipmentDto;
 }
 
 export class InsuranceDto implements VendorInsurance {
@@ -42,7 +42,7 @@ export class InsuranceDto implements VendorInsurance {
   @IsOptional() @Transform(trim) @IsString() @MaxLength(60) policyNumber?: string;
   @IsNumber() @Min(0) @Max(100_000_000) liabilityLimitUsd: number;
   @IsOptional() @IsNumber() @Min(0) @Max(100_000_000) autoLimitUsd?: number;
-  @Matches(DATE, dateMsg('expires')) expires: string;
+  @IsCalendarDate(dateMsg('expires')) expires: string;
 }
 
 export class RatesDto implements VendorRates {
@@ -60,10 +60,10 @@ export class VendorInputDto implements VendorInput {
   @Transform(({ value }) => (typeof value === 'string' ? value.trim().toLowerCase() : value)) @IsEmail({}, { message: 'email must be an e-mail address' }) @MaxLength(LIMITS.emailMax) email: string;
   @Transform(trim) @IsString() @Matches(/^[0-9+()\-. ]{7,40}$/, { message: 'phone must be 7–40 digits, spaces, + ( ) - .' }) phone: string;
   @IsArray() @ArrayMinSize(1, { message: 'states must list at least one state the vendor covers' }) @ArrayMaxSize(49) @IsIn(JURISDICTION_CODES, STATE_MSG) states: string[];
-  @IsArray() @ArrayMaxSize(100) @ValidateNested({ each: true }) @Type(() => OperatorDto) operators: OperatorDto[];
-  @IsDefined() @ValidateNested() @Type(() => InsuranceDto) insurance: InsuranceDto;
-  @IsArray() @ArrayMaxSize(100) @ValidateNested({ each: true }) @Type(() => VehicleDto) vehicles: VehicleDto[];
-  @IsDefined() @ValidateNested() @Type(() => RatesDto) rates: RatesDto;
+  @IsArray() @ArrayMaxSize(100) @Nested(() => OperatorDto, { each: true }) operators: OperatorDto[];
+  @IsDefined() @Nested(() => InsuranceDto) insurance: InsuranceDto;
+  @IsArray() @ArrayMaxSize(100) @Nested(() => VehicleDto, { each: true }) vehicles: VehicleDto[];
+  @IsDefined() @Nested(() => RatesDto) rates: RatesDto;
   @IsOptional() @IsString() @MaxLength(2000) notes?: string;
   @IsOptional() @IsBoolean() active?: boolean;
 }
