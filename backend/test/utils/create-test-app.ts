@@ -29,6 +29,8 @@ export async function createTestApp(override: (b: TestingModuleBuilder) => Testi
   const moduleRef = await override(Test.createTestingModule({ imports: [AppModule] })).compile();
   const app = moduleRef.createNestApplication({ rawBody: true, logger: ['error', 'warn'] });
   configureApp(app);
+  // the tests stand behind a proxy on loopback: each test gives its own client address in X-Forwarded-For
+  app.getHttpAdapter().getInstance().set('trust proxy', 'loopback');
   await app.init();
   return testAppOf(app);
 }
