@@ -43,6 +43,8 @@ export async function createTestApp(override: (b: TestingModuleBuilder) => Testi
 export async function createServedTestApp(): Promise<TestApp> {
   const app = await NestFactory.create(AppModule, { rawBody: true, logger: ['error', 'warn'] });
   configureApp(app);
+  // behind a proxy on loopback, as createTestApp's app: each test gives its own client address in X-Forwarded-For
+  app.getHttpAdapter().getInstance().set('trust proxy', 'loopback');
   await app.init();
   return testAppOf(app);
 }
