@@ -19,7 +19,8 @@ export type TestApp = {
   close: () => Promise<void>;
 };
 
-let ipCounter = 1;
+// each test file starts at its own point, so files run one after another in a worker never share an address
+let ipCounter = 1 + Math.floor(Math.random() * 60_000);
 /** A distinct client address per call (through X-Forwarded-For), so sign-in limits of one test do not touch another. */
 export const nextIp = () => `10.${process.pid % 250}.${Math.floor(ipCounter / 250) % 250}.${ipCounter++ % 250}`;
 
