@@ -14,6 +14,7 @@ cleanup() {
 }
 trap cleanup EXIT INT TERM
 bash backend/scripts/pg.sh stop >/dev/null 2>&1 || true   # restart so the preload option takes effect
+bash backend/scripts/system-deps.sh postgresql
 bash backend/scripts/pg.sh start >/dev/null
 bash backend/scripts/pg.sh recreate
 export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT/$PGDB"

@@ -4,6 +4,7 @@
 set -euo pipefail
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/../.." && pwd)"
 cd "$ROOT"
+bash backend/scripts/system-deps.sh postgresql
 source backend/scripts/local-stack.sh
 SKIP_FRONTEND_BUILD=1 bash backend/scripts/build.sh
 bring_up development

@@ -12,6 +12,7 @@ cleanup() {
 }
 trap cleanup EXIT INT TERM
 
+bash backend/scripts/system-deps.sh postgresql chromium || { echo "0 passed, 1 failed"; exit 1; }
 bash backend/scripts/pg.sh start >/dev/null || { echo "0 passed, 1 failed"; exit 1; }
 bash backend/scripts/pg.sh recreate || { echo "0 passed, 1 failed"; exit 1; }
 export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT/$PGDB"
@@ -27,21 +28,22 @@ mkdir -p .data
 export NODE_OPTIONS="--experimental-vm-modules --disable-warning=ExperimentalWarning"
 # unit and integration tests side by side; then the browser tests one file at a time, so the single server under
 # test and Chromium are not starved of the machine's two cores
-run_jest() { # run_jest <results-file> <jest args...>
+run_jest() { # run_jest <counts-file> <jest args...>
   local out="$1"; shift
   rm -f "$out"
-  npx jest --testTimeout=30000 --forceExit --json --outputFile="$out" "$@"
+  JEST_COUNTS_FILE="$out" npx jest --testTimeout=30000 --forceExit --reporters=default --reporters="$ROOT/backend/scripts/count-reporter.cjs" "$@"
 }
 rc=0
 run_jest .data/jest-unit.json --projects common/jest.config.cjs backend/jest.config.cjs --maxWorkers=2 --passWithNoTests "$@" || rc=$?
 run_jest .data/jest-browser.json --projects frontend/e2e/jest.config.cjs --runInBand --passWithNoTests "$@" || rc=$?
+# the closing line: every test of both runs; a run that wrote no counts (jest itself failed) is one failure
 node -e '
   const fs = require("fs");
   let passed = 0, failed = 0, ran = 0;
   for (const f of process.argv.slice(1)) {
     if (!fs.existsSync(f)) { failed += 1; continue; }
     const r = JSON.parse(fs.readFileSync(f, "utf8"));
-    passed += r.numPassedTests; failed += r.numFailedTests + (r.numRuntimeErrorTestSuites || 0); ran += r.numTotalTests;
+    passed += r.passed; failed += r.failed; ran += r.total;
   }
   console.log(`${passed} passed, ${failed} failed`);
   if (ran === 0) process.exit(1);

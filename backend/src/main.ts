@@ -2,10 +2,11 @@ import 'reflect-metadata';
 import { Logger } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import { NestExpressApplication } from '@nestjs/platform-express';
-import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import { SwaggerModule } from '@nestjs/swagger';
 import { AppModule } from './app.module';
 import { configureApp } from './configure-app';
 import { validateEnv } from './config/env.validation';
+import { buildOpenApiDocument } from './openapi';
 
 async function bootstrap(): Promise<void> {
   let env;
@@ -17,10 +18,7 @@ async function bootstrap(): Promise<void> {
   }
   const app = await NestFactory.create<NestExpressApplication>(AppModule, { rawBody: true, bufferLogs: false });
   configureApp(app);
-  const doc = SwaggerModule.createDocument(
-    app,
-    new DocumentBuilder().setTitle('Amberline API').setDescription('Oversize/overweight move desk').setVersion('0.1.0').addBearerAuth().build(),
-  );
+  const doc = buildOpenApiDocument(app);
   SwaggerModule.setup('api/docs', app, doc);
   await app.listen(env.PORT, env.HOST);
   Logger.log(`Amberline listening on http://${env.HOST}:${env.PORT}`, 'Bootstrap');

@@ -32,6 +32,9 @@ class ApiValidationPipe extends ValidationPipe {
       const problems = unsafeInput(value, metadata.data ?? '');
       if (problems.length) throw failed(problems);
     }
+    // a list (or nothing) where the route takes an object would otherwise be read as an object with no fields
+    const takesObject = metadata.type === 'body' && typeof metadata.metatype === 'function' && metadata.metatype !== Object && metadata.data === undefined;
+    if (takesObject && (value === null || typeof value !== 'object' || Array.isArray(value))) throw failed([{ field: 'body', reason: 'must be a JSON object' }]);
     return super.transform(value, metadata);
   }
 }

@@ -1,4 +1,5 @@
-import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, Post } from '@nestjs/common';
+import { UuidParam } from '../core/param-pipes';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { EscortBookingDto, MoveEscortsDto, SessionUser } from '@amberline/common';
 import { CurrentUser } from '../core/decorators/current-user.decorator';
@@ -14,13 +15,13 @@ export class EscortBookingsController {
 
   @Get()
   @Roles('admin', 'dispatcher', 'permit_clerk')
-  list(@Param('moveId', new ParseUUIDPipe()) moveId: string, @CurrentUser() user: SessionUser): Promise<MoveEscortsDto> {
+  list(@Param('moveId', UuidParam) moveId: string, @CurrentUser() user: SessionUser): Promise<MoveEscortsDto> {
     return this.bookings.forMove(moveId, user, new Date());
   }
 
   @Post()
   @Roles('admin', 'dispatcher')
-  request(@Param('moveId', new ParseUUIDPipe()) moveId: string, @Body() dto: CreateEscortBookingDto, @CurrentUser() user: SessionUser): Promise<EscortBookingDto> {
+  request(@Param('moveId', UuidParam) moveId: string, @Body() dto: CreateEscortBookingDto, @CurrentUser() user: SessionUser): Promise<EscortBookingDto> {
     return this.bookings.request(moveId, dto, user, new Date());
   }
 
@@ -28,8 +29,8 @@ export class EscortBookingsController {
   @HttpCode(200)
   @Roles('admin', 'dispatcher')
   cancel(
-    @Param('moveId', new ParseUUIDPipe()) moveId: string,
-    @Param('bookingId', new ParseUUIDPipe()) bookingId: string,
+    @Param('moveId', UuidParam) moveId: string,
+    @Param('bookingId', UuidParam) bookingId: string,
     @Body() dto: CancelEscortBookingDto,
     @CurrentUser() user: SessionUser,
   ): Promise<EscortBookingDto> {

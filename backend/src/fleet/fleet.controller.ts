@@ -1,4 +1,5 @@
-import { Body, Controller, Get, Param, ParseIntPipe, ParseUUIDPipe, Post, Put, Query } from '@nestjs/common';
+import { Body, Controller, Get, Param, Post, Put, Query } from '@nestjs/common';
+import { UuidParam, OptionalIntParam } from '../core/param-pipes';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { SessionUser, TractorDto, TrailerDto } from '@amberline/common';
 import { CurrentUser } from '../core/decorators/current-user.decorator';
@@ -20,7 +21,7 @@ export class FleetController {
 
   @Get('tractors/:id')
   @Roles('admin', 'dispatcher', 'permit_clerk')
-  async tractor(@Param('id', new ParseUUIDPipe()) id: string): Promise<TractorDto> {
+  async tractor(@Param('id', UuidParam) id: string): Promise<TractorDto> {
     return toTractorDto(await this.fleet.tractor(id));
   }
 
@@ -33,8 +34,8 @@ export class FleetController {
   @Put('tractors/:id')
   @Roles('admin')
   updateTractor(
-    @Param('id', new ParseUUIDPipe()) id: string,
-    @Query('version', new ParseIntPipe({ optional: true })) version: number | undefined,
+    @Param('id', UuidParam) id: string,
+    @Query('version', OptionalIntParam) version: number | undefined,
     @Body() dto: TractorInputDto,
     @CurrentUser() user: SessionUser,
   ): Promise<TractorDto> {
@@ -49,7 +50,7 @@ export class FleetController {
 
   @Get('trailers/:id')
   @Roles('admin', 'dispatcher', 'permit_clerk')
-  async trailer(@Param('id', new ParseUUIDPipe()) id: string): Promise<TrailerDto> {
+  async trailer(@Param('id', UuidParam) id: string): Promise<TrailerDto> {
     return toTrailerDto(await this.fleet.trailer(id));
   }
 
@@ -62,8 +63,8 @@ export class FleetController {
   @Put('trailers/:id')
   @Roles('admin')
   updateTrailer(
-    @Param('id', new ParseUUIDPipe()) id: string,
-    @Query('version', new ParseIntPipe({ optional: true })) version: number | undefined,
+    @Param('id', UuidParam) id: string,
+    @Query('version', OptionalIntParam) version: number | undefined,
     @Body() dto: TrailerInputDto,
     @CurrentUser() user: SessionUser,
   ): Promise<TrailerDto> {

@@ -1,4 +1,5 @@
-import { Controller, Get, Param, ParseUUIDPipe, Post, Query } from '@nestjs/common';
+import { Controller, Get, Param, Post, Query } from '@nestjs/common';
+import { UuidParam } from '../core/param-pipes';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { OutboxMessageDto } from '@amberline/common';
 import { Roles } from '../core/decorators/roles.decorator';
@@ -20,7 +21,7 @@ export class MailController {
 
   @Post(':id/retry')
   @Roles('admin')
-  retry(@Param('id', new ParseUUIDPipe()) id: string): Promise<OutboxMessageDto> {
+  retry(@Param('id', UuidParam) id: string): Promise<OutboxMessageDto> {
     return this.mail.retry(id, new Date());
   }
 }

@@ -1,4 +1,5 @@
-import { Body, Controller, Get, Param, ParseUUIDPipe, Patch, Post, Query } from '@nestjs/common';
+import { Body, Controller, Get, Param, Patch, Post, Query } from '@nestjs/common';
+import { UuidParam } from '../core/param-pipes';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { AssessmentDto, HistoryEntryDto, MoveDto, MovesPage, ReassessmentPreview, ScheduleDto, SessionUser, StageCounts } from '@amberline/common';
 import { CurrentUser } from '../core/decorators/current-user.decorator';
@@ -42,55 +43,55 @@ export class MovesController {
 
   @Get(':id')
   @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
-  async get(@Param('id', new ParseUUIDPipe()) id: string, @CurrentUser() user: SessionUser): Promise<MoveDto> {
+  async get(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<MoveDto> {
     return toMoveDto(await this.moves.get(id, user));
   }
 
   @Patch(':id')
   @Roles('admin', 'dispatcher')
-  update(@Param('id', new ParseUUIDPipe()) id: string, @Body() dto: UpdateMoveDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
+  update(@Param('id', UuidParam) id: string, @Body() dto: UpdateMoveDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
     return this.moves.update(id, dto, user, new Date());
   }
 
   @Get(':id/assessment')
   @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
-  assessment(@Param('id', new ParseUUIDPipe()) id: string, @CurrentUser() user: SessionUser): Promise<AssessmentDto> {
+  assessment(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<AssessmentDto> {
     return this.moves.assessment(id, user, new Date());
   }
 
   @Post(':id/stage')
   @Roles('admin', 'dispatcher')
-  stage(@Param('id', new ParseUUIDPipe()) id: string, @Body() dto: StageChangeDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
+  stage(@Param('id', UuidParam) id: string, @Body() dto: StageChangeDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
     return this.workflow.transition(id, dto, user, new Date());
   }
 
   @Post(':id/reopen')
   @Roles('admin', 'dispatcher')
-  reopen(@Param('id', new ParseUUIDPipe()) id: string, @Body() dto: ReopenDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
+  reopen(@Param('id', UuidParam) id: string, @Body() dto: ReopenDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
     return this.workflow.reopen(id, dto, user, new Date());
   }
 
   @Get(':id/reassessment')
   @Roles('admin', 'dispatcher', 'permit_clerk')
-  reassessment(@Param('id', new ParseUUIDPipe()) id: string, @CurrentUser() user: SessionUser): Promise<ReassessmentPreview> {
+  reassessment(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<ReassessmentPreview> {
     return this.workflow.reassessmentPreview(id, user, new Date());
   }
 
   @Post(':id/reassess')
   @Roles('admin', 'dispatcher')
-  reassess(@Param('id', new ParseUUIDPipe()) id: string, @Body() dto: ReassessDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
+  reassess(@Param('id', UuidParam) id: string, @Body() dto: ReassessDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
     return this.workflow.reassess(id, dto, user, new Date());
   }
 
   @Get(':id/schedule')
   @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
-  schedule(@Param('id', new ParseUUIDPipe()) id: string, @CurrentUser() user: SessionUser): Promise<ScheduleDto> {
+  schedule(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<ScheduleDto> {
     return this.workflow.scheduleOf(id, user, new Date());
   }
 
   @Get(':id/history')
   @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
-  history(@Param('id', new ParseUUIDPipe()) id: string, @CurrentUser() user: SessionUser): Promise<HistoryEntryDto[]> {
+  history(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<HistoryEntryDto[]> {
     return this.moves.history(id, user);
   }
 }

@@ -1,6 +1,7 @@
-import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Patch, Post, Query, StreamableFile, UploadedFile, UseInterceptors } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, Patch, Post, Query, StreamableFile, UploadedFile, UseInterceptors } from '@nestjs/common';
+import { UuidParam } from '../core/param-pipes';
 import { FileInterceptor } from '@nestjs/platform-express';
-import { ApiBearerAuth, ApiConsumes, ApiTags } from '@nestjs/swagger';
+import { ApiBearerAuth, ApiBody, ApiConsumes, ApiTags } from '@nestjs/swagger';
 import type {
   AssignPermitsResponse, ExpiryScanResult, PaymentDto, PermitDocumentDto, PermitDto, PermitOverviewDto, PermitsPage, SessionUser, SyncPermitsResponse,
 } from '@amberline/common';
@@ -11,8 +12,6 @@ import { AssignPermitsDto, ListPermitsQuery, PayPermitDto, RefundPermitDto, Upda
 import { ExpiryScanService } from './expiry-scan.service';
 import { PaymentsService } from './payments/payments.service';
 import { PermitsService } from './permits.service';
-
-const uuid = new ParseUUIDPipe();
 
 @ApiTags('permits')
 @ApiBearerAuth()
@@ -59,40 +58,44 @@ export class PermitsController {
 
   @Get('permits/:id')
   @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
-  get(@Param('id', uuid) id: string, @CurrentUser() user: SessionUser): Promise<PermitDto> {
+  get(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<PermitDto> {
     return this.permits.get(id, user, new Date());
   }
 
   @Patch('permits/:id')
   @Roles('admin', 'permit_clerk')
-  update(@Param('id', uuid) id: string, @Body() dto: UpdatePermitDto, @CurrentUser() user: SessionUser): Promise<PermitDto> {
+  update(@Param('id', UuidParam) id: string, @Body() dto: UpdatePermitDto, @CurrentUser() user: SessionUser): Promise<PermitDto> {
     return this.permits.update(id, dto, user, new Date());
   }
 
   @Get('moves/:id/permits')
   @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
-  forMove(@Param('id', uuid) id: string, @CurrentUser() user: SessionUser): Promise<PermitDto[]> {
+  forMove(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<PermitDto[]> {
     return this.permits.forMove(id, user, new Date());
   }
 
   @Post('moves/:id/permits/sync')
   @HttpCode(200)
   @Roles('admin', 'dispatcher', 'permit_clerk')
-  sync(@Param('id', uuid) id: string, @CurrentUser() user: SessionUser): Promise<SyncPermitsResponse> {
+  sync(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<SyncPermitsResponse> {
     return this.permits.syncForMove(id, user, new Date());
   }
 
   @Post('permits/:id/documents')
   @Roles('admin', 'permit_clerk')
   @ApiConsumes('multipart/form-data')
+  @ApiBody({
+    description: "The state's permit as one PDF file",
+    schema: { type: 'object', required: ['file'], properties: { file: { type: 'string', format: 'binary', description: `a PDF of at most ${MAX_PDF_BYTES} bytes` } } },
+  })
   @UseInterceptors(FileInterceptor('file', { limits: { fileSize: MAX_PDF_BYTES, files: 1, fields: 5 } }))
-  upload(@Param('id', uuid) id: string, @UploadedFile() file: UploadedPdf | undefined, @CurrentUser() user: SessionUser): Promise<PermitDocumentDto> {
+  upload(@Param('id', UuidParam) id: string, @UploadedFile() file: UploadedPdf | undefined, @CurrentUser() user: SessionUser): Promise<PermitDocumentDto> {
     return this.documents.upload(id, file, user);
   }
 
   @Get('permits/:id/documents/:docId')
   @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
-  async download(@Param('id', uuid) id: string, @Param('docId', uuid) docId: string, @CurrentUser() user: SessionUser): Promise<StreamableFile> {
+  async download(@Param('id', UuidParam) id: string, @Param('docId', UuidParam) docId: string, @CurrentUser() user: SessionUser): Promise<StreamableFile> {
     const f = await this.documents.open(id, docId, user);
     return new StreamableFile(f.stream, {
       type: f.contentType,
@@ -103,13 +106,13 @@ export class PermitsController {
 
   @Post('permits/:id/payments')
   @Roles('admin', 'permit_clerk')
-  pay(@Param('id', uuid) id: string, @Body() dto: PayPermitDto, @CurrentUser() user: SessionUser): Promise<PaymentDto> {
+  pay(@Param('id', UuidParam) id: string, @Body() dto: PayPermitDto, @CurrentUser() user: SessionUser): Promise<PaymentDto> {
     return this.payments.pay(id, dto, user, new Date());
   }
 
   @Post('permits/:id/refunds')
   @Roles('admin', 'permit_clerk')
-  refund(@Param('id', uuid) id: string, @Body() dto: RefundPermitDto, @CurrentUser() user: SessionUser): Promise<PaymentDto> {
+  refund(@Param('id', UuidParam) id: string, @Body() dto: RefundPermitDto, @CurrentUser() user: SessionUser): Promise<PaymentDto> {
     return this.payments.refund(id, dto, user, new Date());
   }
 }

@@ -1,4 +1,5 @@
-import { Body, Controller, Get, Param, ParseUUIDPipe, Post, Res } from '@nestjs/common';
+import { Body, Controller, Get, Param, Post, Res } from '@nestjs/common';
+import { UuidParam } from '../core/param-pipes';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import type { DepartureChecksDto, RunSheetDto, SessionUser } from '@amberline/common';
@@ -16,13 +17,13 @@ export class RunSheetsController {
 
   @Get('run-sheet')
   @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
-  get(@Param('id', new ParseUUIDPipe()) id: string, @CurrentUser() user: SessionUser): Promise<RunSheetDto> {
+  get(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<RunSheetDto> {
     return this.sheets.build(id, user, new Date());
   }
 
   @Get('run-sheet.pdf')
   @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
-  async pdf(@Param('id', new ParseUUIDPipe()) id: string, @CurrentUser() user: SessionUser, @Res() res: Response): Promise<void> {
+  async pdf(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser, @Res() res: Response): Promise<void> {
     const sheet = await this.sheets.build(id, user, new Date());
     const doc = renderRunSheetPdf(sheet);
     res.setHeader('content-type', 'application/pdf');
@@ -33,21 +34,21 @@ export class RunSheetsController {
 
   @Get('departure-checks')
   @Roles('admin', 'dispatcher', 'driver')
-  checks(@Param('id', new ParseUUIDPipe()) id: string, @CurrentUser() user: SessionUser): Promise<DepartureChecksDto[]> {
+  checks(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<DepartureChecksDto[]> {
     return this.sheets.checksHistory(id, user);
   }
 
   @Post('departure-checks')
   @Roles('driver')
-  submit(@Param('id', new ParseUUIDPipe()) id: string, @Body() dto: DepartureChecksDtoIn, @CurrentUser() user: SessionUser): Promise<DepartureChecksDto> {
+  submit(@Param('id', UuidParam) id: string, @Body() dto: DepartureChecksDtoIn, @CurrentUser() user: SessionUser): Promise<DepartureChecksDto> {
     return this.sheets.submitChecks(id, dto, user, new Date());
   }
 
   @Post('departure-checks/:checksId/override')
   @Roles('admin', 'dispatcher')
   override(
-    @Param('id', new ParseUUIDPipe()) id: string,
-    @Param('checksId', new ParseUUIDPipe()) checksId: string,
+    @Param('id', UuidParam) id: string,
+    @Param('checksId', UuidParam) checksId: string,
     @Body() dto: OverrideChecksDto,
     @CurrentUser() user: SessionUser,
   ): Promise<DepartureChecksDto> {
@@ -56,7 +57,7 @@ export class RunSheetsController {
 
   @Post('run-sheet/acknowledgement')
   @Roles('driver')
-  acknowledge(@Param('id', new ParseUUIDPipe()) id: string, @Body() dto: AcknowledgeDto, @CurrentUser() user: SessionUser): Promise<RunSheetDto> {
+  acknowledge(@Param('id', UuidParam) id: string, @Body() dto: AcknowledgeDto, @CurrentUser() user: SessionUser): Promise<RunSheetDto> {
     return this.sheets.acknowledge(id, dto, user, new Date());
   }
 }

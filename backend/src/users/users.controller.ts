@@ -1,4 +1,5 @@
-import { Body, Controller, Get, Param, ParseUUIDPipe, Patch, Post, Query } from '@nestjs/common';
+import { Body, Controller, Get, Param, Patch, Post, Query } from '@nestjs/common';
+import { UuidParam } from '../core/param-pipes';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { Page, SessionUser, UserDto } from '@amberline/common';
 import { CurrentUser } from '../core/decorators/current-user.decorator';
@@ -33,7 +34,7 @@ export class UsersController {
 
   @Patch(':id')
   @Roles('admin')
-  update(@Param('id', new ParseUUIDPipe()) id: string, @Body() dto: UpdateUserDto, @CurrentUser() actor: SessionUser): Promise<UserDto> {
+  update(@Param('id', UuidParam) id: string, @Body() dto: UpdateUserDto, @CurrentUser() actor: SessionUser): Promise<UserDto> {
     return this.users.update(id, dto, actor);
   }
 }

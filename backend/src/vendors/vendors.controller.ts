@@ -1,4 +1,5 @@
-import { Body, Controller, Get, Param, ParseUUIDPipe, Post, Put, Query } from '@nestjs/common';
+import { Body, Controller, Get, Param, Post, Put, Query } from '@nestjs/common';
+import { UuidParam } from '../core/param-pipes';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { SessionUser, VendorDto } from '@amberline/common';
 import { CurrentUser } from '../core/decorators/current-user.decorator';
@@ -20,7 +21,7 @@ export class VendorsController {
 
   @Get(':id')
   @Roles('admin', 'dispatcher')
-  async get(@Param('id', new ParseUUIDPipe()) id: string): Promise<VendorDto> {
+  async get(@Param('id', UuidParam) id: string): Promise<VendorDto> {
     return toVendorDto(await this.vendors.get(id), new Date());
   }
 
@@ -32,7 +33,7 @@ export class VendorsController {
 
   @Put(':id')
   @Roles('admin', 'dispatcher')
-  update(@Param('id', new ParseUUIDPipe()) id: string, @Body() dto: UpdateVendorDto, @CurrentUser() user: SessionUser): Promise<VendorDto> {
+  update(@Param('id', UuidParam) id: string, @Body() dto: UpdateVendorDto, @CurrentUser() user: SessionUser): Promise<VendorDto> {
     return this.vendors.update(id, dto, user, new Date());
   }
 }

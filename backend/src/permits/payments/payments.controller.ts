@@ -1,5 +1,5 @@
 import { Controller, Get, Headers, HttpCode, Post, Query, Req, Res, type RawBodyRequest } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiBearerAuth, ApiBody, ApiHeader, ApiTags } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import type { PaymentsPage, SessionUser } from '@amberline/common';
 import { CurrentUser } from '../../core/decorators/current-user.decorator';
@@ -17,6 +17,8 @@ export class PaymentsController {
   @Post('webhook')
   @Public()
   @HttpCode(200)
+  @ApiHeader({ name: 'stripe-signature', required: true, description: "the processor's signature of the raw body" })
+  @ApiBody({ description: "A payment processor event as the processor sends it (checked against its signature, byte for byte)", schema: { type: 'object', required: ['id', 'type', 'data'], properties: { id: { type: 'string' }, type: { type: 'string' }, data: { type: 'object' } } } })
   webhook(@Req() req: RawBodyRequest<Request>, @Headers('stripe-signature') signature: string | undefined): Promise<{ received: true; handled: boolean }> {
     return this.payments.webhook(req.rawBody, signature, new Date());
   }
