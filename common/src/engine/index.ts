@@ -3,6 +3,7 @@ export * from './reasons';
 export * from './validate';
 export * from './units';
 export * from './bridge-formula';
+export * from './tire-size';
 export * from './axle-weights';
 export * from './axle-group-loads';
 export * from './dimensions';
