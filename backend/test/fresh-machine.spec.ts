@@ -1,3 +1,4 @@
+import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -24,5 +25,24 @@ describe('the closing line of npm test', () => {
     new CountReporter().onRunComplete(new Set(), results);
     expect(JSON.parse(readFileSync(file, 'utf8'))).toEqual({ passed: 3, failed: 2, total: 5 });
     delete process.env.JEST_COUNTS_FILE;
+  });
+});
+
+/** On a fresh machine the scripts install PostgreSQL and Chromium as root, or say exactly what to install. */
+describe('the Debian packages the scripts need', () => {
+  const script = join(__dirname, '..', 'scripts', 'system-deps.sh');
+  const run = (env: Record<string, string>, ...what: string[]) => spawnSync('bash', [script, ...what], { env: { ...process.env, ...env }, encoding: 'utf8' });
+
+  it('passes quietly when they are there (this machine runs the tests with both)', () => {
+    const res = run({}, 'postgresql', 'chromium');
+    expect({ status: res.status, out: res.stdout + res.stderr }).toEqual({ status: 0, out: '' });
+  });
+
+  it('names the missing package and the exact command when it may not install it', () => {
+    const res = run({ CHROMIUM_PATH: '/nonexistent/chromium', SYSTEM_DEPS_INSTALL: 'no' }, 'postgresql', 'chromium');
+    expect(res.status).toBe(1);
+    expect(res.stderr).toContain('missing Debian packages: chromium');
+    expect(res.stderr).toContain('apt-get install -y chromium');
+    expect(res.stderr).not.toContain('postgresql');
   });
 });
