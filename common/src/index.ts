@@ -2,6 +2,7 @@ export * from './auth/roles';
 export * from './moves/stages';
 export * from './moves/schedule';
 export * from './errors/error-codes';
+export * from './errors/domain-errors';
 export * from './validation/limits';
 export * from './validation/dates';
 export * from './types/auth';

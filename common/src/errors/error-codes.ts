@@ -1,3 +1,5 @@
+import type { DomainErrorCode } from './domain-errors';
+
 /** Stable error codes shared by server and browser. The server's exception filter puts one in `error`. */
 export const ERROR_CODES = {
   VALIDATION_FAILED: 'validation_failed',
@@ -21,6 +23,8 @@ export type FieldError = { field: string; reason: string };
 export type ApiErrorBody = {
   statusCode: number;
   error: ErrorCode;
+  /** For refusals by the desk's rules: why, in the domain's terms (see DOMAIN_ERRORS). */
+  code?: DomainErrorCode;
   message: string;
   details?: FieldError[] | Record<string, unknown>;
 };

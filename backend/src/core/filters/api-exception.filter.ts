@@ -1,8 +1,9 @@
 import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
 import type { ErrorRequestHandler, Response } from 'express';
 import { QueryFailedError } from 'typeorm';
-import { ERROR_CODES, type ApiErrorBody, type ErrorCode } from '@amberline/common';
+import { DomainError, ERROR_CODES, type ApiErrorBody, type ErrorCode } from '@amberline/common';
 import { AppException } from '../app-exception';
+import { DOMAIN_STATUS } from './domain-status';
 
 const CODE_BY_STATUS: Record<number, ErrorCode> = {
   400: ERROR_CODES.BAD_REQUEST,
@@ -64,6 +65,10 @@ function parserRefusal(e: ParserError): ApiErrorBody | null {
 
 /** The JSON body of every error: `{ statusCode, error, message, details? }`, never a stack trace. */
 export function errorBody(exception: unknown): ApiErrorBody {
+  if (exception instanceof DomainError) {
+    const { status, error } = DOMAIN_STATUS[exception.code];
+    return { statusCode: status, error, code: exception.code, message: exception.message, details: exception.details };
+  }
   if (exception instanceof AppException) {
     return { statusCode: exception.getStatus(), error: exception.code, message: exception.message, details: exception.details };
   }
