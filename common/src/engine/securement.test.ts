@@ -77,8 +77,117 @@ describe('defaultWll (49 CFR 393.108 table)', () => {
   });
 
   it('a cell not on file → RangeError asking for the marked WLL (393.108(b))', () => {
-    expect(() => defaultWll({ kind: 'chain', size: '5/8', grade: 70 })).toThrow(/marked/);
+    // 49 CFR 393.108 table, chain: no grade 80 cell in 7/16 in (5/8 in grade 70 is now on file: 15,800 lb).
+    expect(() => defaultWll({ kind: 'chain', size: '7/16', grade: 80 })).toThrow(/marked/);
     expect(() => defaultWll({ kind: 'webbing', width: '5' })).toThrow(RangeError);
+  });
+});
+
+// Every cell of the chain, webbing and wire rope tables of 49 CFR 393.108 (references §3 [V], read in the
+// regulation; the same cells in the reproduction of the "Tables to §393.108").
+const CHAIN: [string, string, 30 | 43 | 70 | 80 | 100, number][] = [];
+const CHAIN_ROWS: [string, string, (number | null)[]][] = [
+  ['1/4', '7 mm', [1_300, 2_600, 3_150, 3_500, 4_300]],
+  ['5/16', '8 mm', [1_900, 3_900, 4_700, 4_500, 5_700]],
+  ['3/8', '10 mm', [2_650, 5_400, 6_600, 7_100, 8_800]],
+  ['7/16', '11 mm', [3_700, 7_200, 8_750, null, null]],
+  ['1/2', '13 mm', [4_500, 9_200, 11_300, 12_000, 15_000]],
+  ['5/8', '16 mm', [6_900, 13_000, 15_800, 18_100, 22_600]],
+];
+const GRADES = [30, 43, 70, 80, 100] as const;
+const GRADE_NAMES: Record<number, string> = { 30: 'Grade 30 proof coil', 43: 'Grade 43 high test', 70: 'Grade 70 transport', 80: 'Grade 80 alloy', 100: 'Grade 100 alloy' };
+for (const [inch, mm, cells] of CHAIN_ROWS) cells.forEach((w, i) => w !== null && CHAIN.push([inch, mm, GRADES[i], w]));
+
+describe('defaultWll: every cell of the 49 CFR 393.108 tables on file', () => {
+  it.each(CHAIN.map(([inch, mm, grade, wll]) => [`49 CFR 393.108 table, chain, ${GRADE_NAMES[grade]} ${inch} in (${mm}): ${wll} lb`, inch, mm, grade, wll] as const))(
+    '%s',
+    (_source, inch, mm, grade, wll) => {
+      expect(defaultWll({ kind: 'chain', size: inch, grade }).wllLb).toBe(wll);
+      expect(defaultWll({ kind: 'chain', size: mm, grade }).wllLb).toBe(wll);
+    },
+  );
+
+  it.each([
+    ['7/16', 80],
+    ['7/16', 100],
+  ] as const)('49 CFR 393.108 table, chain: no %s in grade %i cell → asks for the marked WLL', (size, grade) => {
+    expect(() => defaultWll({ kind: 'chain', size, grade })).toThrow(/marked on it \(49 CFR 393.108\(b\)\)/);
+  });
+
+  it.each(CHAIN_ROWS.map(([inch, , cells]) => [inch, cells[0]!] as const))(
+    '49 CFR 393.108(d): unmarked chain %s in counts as grade 30 proof coil: %i lb',
+    (size, wll) => {
+      const r = defaultWll({ kind: 'chain', size });
+      expect(r.wllLb).toBe(wll);
+      expect(r.note).toMatch(/grade 30 \(49 CFR 393.108\(d\)\)/);
+    },
+  );
+
+  it.each([
+    ['1 3/4', '45 mm', 1_750],
+    ['2', '50 mm', 2_000],
+    ['3', '75 mm', 3_000],
+    ['4', '100 mm', 4_000],
+  ] as const)('49 CFR 393.108 table, synthetic webbing %s in (%s): %i lb', (inch, mm, wll) => {
+    expect(defaultWll({ kind: 'webbing', width: inch }).wllLb).toBe(wll);
+    expect(defaultWll({ kind: 'webbing', width: mm }).wllLb).toBe(wll);
+  });
+
+  it.each([
+    ['1/4', '7 mm', 1_400, '49 CFR 393.108 table'],
+    ['5/16', '8 mm', 2_100, '49 CFR 393.108 table'],
+    ['3/8', '10 mm', 3_000, '49 CFR 393.108 table'],
+    ['7/16', '11 mm', 4_100, '49 CFR 393.108 table'],
+    ['1/2', '13 mm', 5_300, '49 CFR 393.108 table'],
+    ['5/8', '16 mm', 8_300, '49 CFR 393.108 table'],
+    ['3/4', '20 mm', 10_900, '49 CFR 393.108 table'],
+    ['7/8', '22 mm', 16_100, '49 CFR 393.108 table as first published, 59 FR (July 6, 1994), FR Doc. 94-16069'],
+    ['1', '25 mm', 20_900, '49 CFR 393.108 table as first published, 59 FR (July 6, 1994), FR Doc. 94-16069'],
+  ] as const)('wire rope (6 × 37, fiber core) %s in (%s): %i lb (%s)', (inch, mm, wll, _source) => {
+    expect(defaultWll({ kind: 'wire-rope', diameter: inch }).wllLb).toBe(wll);
+    expect(defaultWll({ kind: 'wire-rope', diameter: mm }).wllLb).toBe(wll);
+    expect(defaultWll({ kind: 'wire-rope', diameter: inch }).note).toMatch(/393.108\(e\)\(2\)/);
+  });
+
+  // Manila and synthetic fiber rope: the table as first published, 59 FR (July 6, 1994), FR Doc. 94-16069,
+  // "Tables to §393.102(b)(6)" (rows not read in the current eCFR text).
+  const ROPE_SIZES = [
+    ['3/8', '10 mm'],
+    ['7/16', '11 mm'],
+    ['1/2', '13 mm'],
+    ['5/8', '16 mm'],
+    ['3/4', '20 mm'],
+    ['1', '25 mm'],
+  ] as const;
+  const ROPES: [string, 'manila-rope' | 'polypropylene' | 'polyester' | 'nylon', number[]][] = [
+    ['Manila rope', 'manila-rope', [205, 265, 315, 465, 640, 1_050]],
+    ['Polypropylene fiber rope (3-strand and 8-strand)', 'polypropylene', [400, 525, 625, 925, 1_275, 2_100]],
+    ['Polyester fiber rope (3-strand and 8-strand)', 'polyester', [555, 750, 960, 1_500, 1_880, 3_300]],
+    ['Nylon rope', 'nylon', [278, 410, 525, 935, 1_420, 2_520]],
+  ];
+  it.each(ROPES.flatMap(([name, kind, cells]) => cells.map((wll, i) => [`59 FR (July 6, 1994) table, ${name} ${ROPE_SIZES[i][0]} in (${ROPE_SIZES[i][1]}): ${wll} lb`, kind, ROPE_SIZES[i][0], ROPE_SIZES[i][1], wll] as const)))(
+    '%s',
+    (_source, kind, inch, mm, wll) => {
+      const get = (diameter: string) => (kind === 'manila-rope' ? defaultWll({ kind, diameter }) : defaultWll({ kind: 'synthetic-rope', diameter, fiber: kind }));
+      expect(get(inch).wllLb).toBe(wll);
+      expect(get(mm).wllLb).toBe(wll);
+      expect(get(inch).source).toMatch(/FR Doc. 94-16069/);
+    },
+  );
+
+  it('49 CFR 393.108(c): synthetic cordage of unknown fiber counts as polypropylene (1/2 in: 625 lb)', () => {
+    const r = defaultWll({ kind: 'synthetic-rope', diameter: '1/2' });
+    expect(r.wllLb).toBe(625);
+    expect(r.note).toMatch(/polypropylene \(49 CFR 393.108\(c\)\)/);
+  });
+
+  it('double braided nylon rope: its row was not read in the regulation text → asks for the marked WLL', () => {
+    expect(() => defaultWll({ kind: 'synthetic-rope', diameter: '1/2', fiber: 'double-braided-nylon' })).toThrow(/marked on it/);
+  });
+
+  it('size notation: 3/8", 3/8 in and 10 mm are one size; 1-3/4 is 1 3/4', () => {
+    for (const size of ['3/8"', '3/8 in', '3/8 inch', '10mm']) expect(defaultWll({ kind: 'chain', size, grade: 70 }).wllLb).toBe(6_600);
+    expect(defaultWll({ kind: 'webbing', width: '1-3/4' }).wllLb).toBe(1_750);
   });
 });
 

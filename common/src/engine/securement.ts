@@ -48,49 +48,142 @@ export function creditedWll(input: CreditedWllInput): number {
 
 export type ChainGrade = 30 | 43 | 70 | 80 | 100;
 
-export type DefaultWllInput =
-  /** Chain by nominal size (e.g. '3/8') and grade; an unmarked chain counts as grade 30 (393.108(d)). */
-  | { kind: 'chain'; size: string; grade?: ChainGrade }
-  /** Synthetic webbing by width (e.g. '2', '1 3/4'). */
-  | { kind: 'webbing'; width: string };
+export type SyntheticRopeFiber = 'polypropylene' | 'polyester' | 'nylon' | 'double-braided-nylon';
 
-/** The cells of the 393.108 default table held here (read in the regulation; see references). */
-const CHAIN_WLL: Record<string, Partial<Record<ChainGrade, number>>> = {
-  '5/16': { 70: 4_700, 80: 4_500 },
-  '3/8': { 30: 2_650, 43: 5_400, 70: 6_600, 80: 7_100, 100: 8_800 },
-  '1/2': { 70: 11_300 },
-};
-const WEBBING_WLL: Record<string, number> = { '1 3/4': 1_750, '2': 2_000, '3': 3_000, '4': 4_000 };
+export type DefaultWllInput =
+  /** Chain by nominal size ('3/8', '3/8 in' or '10 mm') and grade; an unmarked chain counts as grade 30 (393.108(d)). */
+  | { kind: 'chain'; size: string; grade?: ChainGrade }
+  /** Synthetic webbing by width ('2', '1 3/4', '50 mm'). */
+  | { kind: 'webbing'; width: string }
+  /** Wire rope, 6 × 37 fiber core, by diameter; wire of unknown construction counts as 6 × 37 fiber core (393.108(e)(2)). */
+  | { kind: 'wire-rope'; diameter: string }
+  /** Manila rope by diameter (393.108(f)). */
+  | { kind: 'manila-rope'; diameter: string }
+  /** Synthetic fiber rope by diameter; cordage of unknown fiber counts as polypropylene (393.108(c)). */
+  | { kind: 'synthetic-rope'; diameter: string; fiber?: SyntheticRopeFiber };
 
 /**
- * Default working load limit from the 49 CFR 393.108 tables. Only the table cells this package holds are
- * answered; any other size/grade throws a RangeError asking for the marked WLL (393.108(b): marked values
- * override the table).
+ * The default working load limits of 49 CFR 393.108, in lb, by nominal size in inches. Chain, webbing and wire rope
+ * to 3/4 in: the regulation's tables (references §3, read in the regulation; the same cells in the reproduction of
+ * the "Tables to §393.108"). Wire rope 7/8 and 1 in, manila and synthetic fiber rope: the table as first published,
+ * 59 FR (July 6, 1994), FR Doc. 94-16069, "Tables to §393.102(b)(6)" — since carried into §393.108; these rows were
+ * not read in the current eCFR text. Not held (the text was not read): double braided nylon rope, steel strapping.
+ */
+const CHAIN_WLL: Record<string, Partial<Record<ChainGrade, number>>> = {
+  '1/4': { 30: 1_300, 43: 2_600, 70: 3_150, 80: 3_500, 100: 4_300 },
+  // Grade 80 is lower than grade 70 at this size in the table itself.
+  '5/16': { 30: 1_900, 43: 3_900, 70: 4_700, 80: 4_500, 100: 5_700 },
+  '3/8': { 30: 2_650, 43: 5_400, 70: 6_600, 80: 7_100, 100: 8_800 },
+  // The table lists no grade 80 or grade 100 chain in 7/16 in.
+  '7/16': { 30: 3_700, 43: 7_200, 70: 8_750 },
+  '1/2': { 30: 4_500, 43: 9_200, 70: 11_300, 80: 12_000, 100: 15_000 },
+  '5/8': { 30: 6_900, 43: 13_000, 70: 15_800, 80: 18_100, 100: 22_600 },
+};
+const WEBBING_WLL: Record<string, number> = { '1 3/4': 1_750, '2': 2_000, '3': 3_000, '4': 4_000 };
+const WIRE_ROPE_WLL: Record<string, number> = {
+  '1/4': 1_400,
+  '5/16': 2_100,
+  '3/8': 3_000,
+  '7/16': 4_100,
+  '1/2': 5_300,
+  '5/8': 8_300,
+  '3/4': 10_900,
+  '7/8': 16_100,
+  '1': 20_900,
+};
+const MANILA_WLL: Record<string, number> = { '3/8': 205, '7/16': 265, '1/2': 315, '5/8': 465, '3/4': 640, '1': 1_050 };
+const SYNTHETIC_ROPE_WLL: Record<Exclude<SyntheticRopeFiber, 'double-braided-nylon'>, Record<string, number>> = {
+  polypropylene: { '3/8': 400, '7/16': 525, '1/2': 625, '5/8': 925, '3/4': 1_275, '1': 2_100 },
+  polyester: { '3/8': 555, '7/16': 750, '1/2': 960, '5/8': 1_500, '3/4': 1_880, '1': 3_300 },
+  nylon: { '3/8': 278, '7/16': 410, '1/2': 525, '5/8': 935, '3/4': 1_420, '1': 2_520 },
+};
+/** The metric sizes the tables print beside the inch sizes (mm → in). */
+const METRIC_SIZES: Record<string, string> = {
+  '7': '1/4',
+  '8': '5/16',
+  '10': '3/8',
+  '11': '7/16',
+  '13': '1/2',
+  '16': '5/8',
+  '20': '3/4',
+  '22': '7/8',
+  '25': '1',
+  '45': '1 3/4',
+  '50': '2',
+  '75': '3',
+  '100': '4',
+};
+const FIRST_PUBLISHED = '59 FR (July 6, 1994), FR Doc. 94-16069, tables to §393.102(b)(6), carried into §393.108';
+
+/** '3/8', '3/8"', '3/8 in', '1-3/4', '10 mm' → the table's inch key. */
+function sizeKey(raw: string): string {
+  let v = String(raw).trim().toLowerCase().replace(/\s+/g, ' ');
+  const mm = /^(\d+)\s?mm$/.exec(v);
+  if (mm) return METRIC_SIZES[mm[1]] ?? `${mm[1]} mm`;
+  v = v.replace(/\s?(inches|inch|in\.?|")$/, '').trim();
+  return v.replace(/^(\d+)-(\d+\/\d+)$/, '$1 $2');
+}
+
+const noDefault = (what: string): never => {
+  throw new RangeError(`${what}: no default WLL on file; use the WLL marked on it (49 CFR 393.108(b))`);
+};
+
+/**
+ * Default working load limit from the 49 CFR 393.108 tables. Cells the tables do not list (e.g. grade 80 chain in
+ * 7/16 in) and rows not held here throw a RangeError asking for the marked WLL (393.108(b): marked values
+ * override the table). Unmarked chain counts as grade 30 proof coil (393.108(d)); synthetic cordage of unknown fiber
+ * as polypropylene (393.108(c)); wire of unknown construction as 6 × 37 fiber core (393.108(e)(2)).
  */
 export function defaultWll(input: DefaultWllInput): { wllLb: number; source: string; note?: string } {
   if (input.kind === 'chain') {
     const grade: ChainGrade = input.grade ?? 30;
-    const row = CHAIN_WLL[String(input.size).trim()];
+    const row = CHAIN_WLL[sizeKey(input.size)];
     const wll = row?.[grade];
-    if (wll === undefined) {
-      throw new RangeError(
-        `chain size "${input.size}" grade ${grade}: no default WLL on file; use the WLL marked on the chain (49 CFR 393.108(b))`,
-      );
-    }
+    if (wll === undefined) noDefault(`chain size "${input.size}" grade ${grade}`);
     return {
-      wllLb: wll,
+      wllLb: wll!,
       source: `${SOURCES.cfr393_108} table`,
       note: input.grade === undefined ? 'unmarked chain counts as grade 30 (49 CFR 393.108(d))' : undefined,
     };
   }
   if (input.kind === 'webbing') {
-    const wll = WEBBING_WLL[String(input.width).trim()];
+    const wll = WEBBING_WLL[sizeKey(input.width)];
     if (wll === undefined) {
       throw new RangeError(`webbing width "${input.width}" in: no default WLL on file; use the marked WLL (49 CFR 393.108(b))`);
     }
     return { wllLb: wll, source: `${SOURCES.cfr393_108} table` };
   }
-  throw new RangeError(`kind must be 'chain' or 'webbing'; got ${String((input as { kind?: unknown }).kind)}`);
+  if (input.kind === 'wire-rope') {
+    const key = sizeKey(input.diameter);
+    const wll = WIRE_ROPE_WLL[key];
+    if (wll === undefined) noDefault(`wire rope "${input.diameter}"`);
+    return {
+      wllLb: wll!,
+      source: key === '7/8' || key === '1' ? `${SOURCES.cfr393_108} table (${FIRST_PUBLISHED})` : `${SOURCES.cfr393_108} table`,
+      note: 'wire rope 6 × 37, fiber core; wire of unknown construction counts as such (49 CFR 393.108(e)(2))',
+    };
+  }
+  if (input.kind === 'manila-rope') {
+    const wll = MANILA_WLL[sizeKey(input.diameter)];
+    if (wll === undefined) noDefault(`manila rope "${input.diameter}"`);
+    return { wllLb: wll!, source: `${SOURCES.cfr393_108} table (${FIRST_PUBLISHED})`, note: 'unmarked manila rope by its diameter (49 CFR 393.108(f))' };
+  }
+  if (input.kind === 'synthetic-rope') {
+    const fiber: SyntheticRopeFiber = input.fiber ?? 'polypropylene';
+    if (fiber === 'double-braided-nylon') noDefault(`double braided nylon rope "${input.diameter}"`);
+    const table = SYNTHETIC_ROPE_WLL[fiber as Exclude<SyntheticRopeFiber, 'double-braided-nylon'>];
+    if (!table) throw new RangeError(`fiber must be 'polypropylene', 'polyester', 'nylon' or 'double-braided-nylon'; got ${String(input.fiber)}`);
+    const wll = table[sizeKey(input.diameter)];
+    if (wll === undefined) noDefault(`${fiber} rope "${input.diameter}"`);
+    return {
+      wllLb: wll!,
+      source: `${SOURCES.cfr393_108} table (${FIRST_PUBLISHED})`,
+      note: input.fiber === undefined ? 'synthetic cordage of unknown fiber counts as polypropylene (49 CFR 393.108(c))' : undefined,
+    };
+  }
+  throw new RangeError(
+    `kind must be 'chain', 'webbing', 'wire-rope', 'manila-rope' or 'synthetic-rope'; got ${String((input as { kind?: unknown }).kind)}`,
+  );
 }
 
 export type TiedownSpec = {
