@@ -173,3 +173,50 @@ describe('travelWindows', () => {
     expect(() => travelWindows({ date: '2024-06-05', ...DC, rule: open, ...patch })).toThrow(msg);
   });
 });
+
+describe('travelWindows: a curfew that crosses midnight (22:00–05:00)', () => {
+  // Rule shape as the rulebook words it: "an end before the start crosses midnight" (jurisdiction-rule.ts); the part
+  // after midnight falls on the next calendar day in the same zone.
+  const night = (days?: number[]): TravelRules => ({
+    ...open,
+    curfews: known([{ area: 'test county', start: '22:00', end: '05:00', appliesIn: 'everywhere', ...(days ? { days } : {}) }], 'curfew wording for the test'),
+  });
+  const allowedAt = (r: ReturnType<typeof travelWindows>, hhmm: string): boolean =>
+    r.intervals.some((i) => minutes(i.startLocal) <= minutes(hhmm) && minutes(hhmm) < (i.endLocal === '24:00' ? 24 * 60 : minutes(i.endLocal)));
+
+  it.each([
+    ['04:59', false, 'just before the end: still the curfew that began the evening before'],
+    ['05:00', true, 'at the end'],
+    ['05:01', true, 'just after the end'],
+    ['21:59', true, 'just before the start'],
+    ['22:00', false, 'at the start'],
+    ['22:01', false, 'just after the start'],
+    ['23:59', false, 'before midnight'],
+    ['00:00', false, 'midnight: the part after midnight of the day before'],
+  ] as const)('every day, Wednesday 2024-06-05 at %s: allowed %p (%s)', (hhmm, allowed) => {
+    expect(allowedAt(travelWindows({ date: '2024-06-05', ...DC, rule: night() }), hhmm)).toBe(allowed);
+  });
+
+  it('a curfew that starts on Fridays only takes Friday evening and Saturday morning, not Friday morning', () => {
+    const fri = travelWindows({ date: '2024-06-07', ...DC, rule: night([5]) });
+    const sat = travelWindows({ date: '2024-06-08', ...DC, rule: night([5]) });
+    expect(fri.intervals.map((i) => [i.startLocal, i.endLocal])).toEqual([['00:00', '22:00']]);
+    expect(sat.intervals.map((i) => [i.startLocal, i.endLocal])).toEqual([['05:00', '24:00']]);
+    expect(allowedAt(sat, '04:59')).toBe(false);
+    expect(allowedAt(sat, '05:00')).toBe(true);
+    expect(allowedAt(fri, '21:59')).toBe(true);
+    expect(allowedAt(fri, '22:00')).toBe(false);
+    expect(sat.restrictions.map((x) => x.code)).toEqual(['curfew']);
+  });
+
+  it.each([
+    // 15 U.S.C. 260a: DST starts 2024-03-10 and ends 2024-11-03 at 2 a.m.; the curfew's ends stay on the wall clock.
+    ['2024-03-10', '2024-03-10T09:00:00.000Z', '2024-03-11T02:00:00.000Z'],
+    ['2024-11-03', '2024-11-03T10:00:00.000Z', '2024-11-04T03:00:00.000Z'],
+  ])('15 U.S.C. 260a, New York %s: travel 05:00–22:00 on the wall clock across the change', (date, start, end) => {
+    const r = travelWindows({ date, ...DC, rule: night() });
+    expect(r.intervals.map((i) => [i.startLocal, i.endLocal])).toEqual([['05:00', '22:00']]);
+    expect(r.intervals[0].start).toBe(start);
+    expect(r.intervals[0].end).toBe(end);
+  });
+});

@@ -21,6 +21,14 @@ describe('validateJurisdictionRule', () => {
     expect(() => validateJurisdictionRule(good())).not.toThrow();
   });
 
+  it('a curfew that crosses midnight (22:00–05:00) is valid; one that starts and ends at the same time is not', () => {
+    const r = good();
+    r.travel.curfews.value[0] = { area: 'Richmond', start: '22:00', end: '05:00', appliesIn: 'urban', days: [5, 6] };
+    expect(() => validateJurisdictionRule(r)).not.toThrow();
+    r.travel.curfews.value[0].end = '22:00';
+    expect(() => validateJurisdictionRule(r)).toThrow(/rule.travel.curfews.value\[0\].end must differ from the start/);
+  });
+
   it.each([
     // a value with no source
     [(r: any) => delete r.legal.widthIn.citation, /rule.legal.widthIn.citation must be a non-empty string/],
