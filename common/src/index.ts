@@ -1,4 +1,5 @@
 export * from './auth/roles';
+export * from './auth/permissions';
 export * from './moves/stages';
 export * from './moves/schedule';
 export * from './errors/error-codes';

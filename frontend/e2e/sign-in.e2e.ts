@@ -10,7 +10,7 @@ describe('sign-in in the browser', () => {
 
   it.each([
     ['admin@amberline.example', 'Admin', ['Overview', 'Moves', 'Permit desk', 'Payments', 'Escort vendors', 'Fleet', 'Rulebook', 'Users']],
-    ['dispatcher@amberline.example', 'Dispatcher', ['Overview', 'Moves', 'Permit desk', 'Escort vendors', 'Fleet', 'Rulebook']],
+    ['dispatcher@amberline.example', 'Dispatcher', ['Overview', 'Moves', 'Permit desk', 'Payments', 'Escort vendors', 'Fleet', 'Rulebook']],
     ['clerk@amberline.example', 'Permit clerk', ['Overview', 'Moves', 'Permit desk', 'Payments', 'Fleet', 'Rulebook']],
     ['driver@amberline.example', 'Driver', ['Run sheets']],
   ])('%s signs in and sees the navigation of a %s', async (email, roleLabel, nav) => {

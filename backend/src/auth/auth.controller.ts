@@ -3,7 +3,7 @@ import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { LoginResponse, SessionUser } from '@amberline/common';
 import { CurrentUser } from '../core/decorators/current-user.decorator';
 import { Public } from '../core/decorators/public.decorator';
-import { ALL_ROLES, Roles } from '../core/decorators/roles.decorator';
+import { Roles } from '../core/decorators/roles.decorator';
 import { AuthService } from './auth.service';
 import { LoginDto } from './dto/login.dto';
 
@@ -21,7 +21,7 @@ export class AuthController {
 
   @ApiBearerAuth()
   @Get('me')
-  @Roles(...ALL_ROLES)
+  @Roles('session.read')
   me(@CurrentUser() user: SessionUser): SessionUser {
     return user;
   }

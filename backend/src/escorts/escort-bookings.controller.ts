@@ -14,20 +14,20 @@ export class EscortBookingsController {
   constructor(private readonly bookings: EscortBookingsService) {}
 
   @Get()
-  @Roles('admin', 'dispatcher', 'permit_clerk')
+  @Roles('escorts.read')
   list(@Param('moveId', UuidParam) moveId: string, @CurrentUser() user: SessionUser): Promise<MoveEscortsDto> {
     return this.bookings.forMove(moveId, user, new Date());
   }
 
   @Post()
-  @Roles('admin', 'dispatcher')
+  @Roles('escorts.book')
   request(@Param('moveId', UuidParam) moveId: string, @Body() dto: CreateEscortBookingDto, @CurrentUser() user: SessionUser): Promise<EscortBookingDto> {
     return this.bookings.request(moveId, dto, user, new Date());
   }
 
   @Post(':bookingId/cancel')
   @HttpCode(200)
-  @Roles('admin', 'dispatcher')
+  @Roles('escorts.book')
   cancel(
     @Param('moveId', UuidParam) moveId: string,
     @Param('bookingId', UuidParam) bookingId: string,

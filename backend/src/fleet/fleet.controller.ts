@@ -14,25 +14,25 @@ export class FleetController {
   constructor(private readonly fleet: FleetService) {}
 
   @Get('tractors')
-  @Roles('admin', 'dispatcher', 'permit_clerk')
+  @Roles('fleet.read')
   tractors(): Promise<TractorDto[]> {
     return this.fleet.listTractors();
   }
 
   @Get('tractors/:id')
-  @Roles('admin', 'dispatcher', 'permit_clerk')
+  @Roles('fleet.read')
   async tractor(@Param('id', UuidParam) id: string): Promise<TractorDto> {
     return toTractorDto(await this.fleet.tractor(id));
   }
 
   @Post('tractors')
-  @Roles('admin')
+  @Roles('fleet.edit')
   createTractor(@Body() dto: TractorInputDto, @CurrentUser() user: SessionUser): Promise<TractorDto> {
     return this.fleet.saveTractor(dto, user);
   }
 
   @Put('tractors/:id')
-  @Roles('admin')
+  @Roles('fleet.edit')
   updateTractor(
     @Param('id', UuidParam) id: string,
     @Query('version', OptionalIntParam) version: number | undefined,
@@ -43,25 +43,25 @@ export class FleetController {
   }
 
   @Get('trailers')
-  @Roles('admin', 'dispatcher', 'permit_clerk')
+  @Roles('fleet.read')
   trailers(): Promise<TrailerDto[]> {
     return this.fleet.listTrailers();
   }
 
   @Get('trailers/:id')
-  @Roles('admin', 'dispatcher', 'permit_clerk')
+  @Roles('fleet.read')
   async trailer(@Param('id', UuidParam) id: string): Promise<TrailerDto> {
     return toTrailerDto(await this.fleet.trailer(id));
   }
 
   @Post('trailers')
-  @Roles('admin')
+  @Roles('fleet.edit')
   createTrailer(@Body() dto: TrailerInputDto, @CurrentUser() user: SessionUser): Promise<TrailerDto> {
     return this.fleet.saveTrailer(dto, user);
   }
 
   @Put('trailers/:id')
-  @Roles('admin')
+  @Roles('fleet.edit')
   updateTrailer(
     @Param('id', UuidParam) id: string,
     @Query('version', OptionalIntParam) version: number | undefined,

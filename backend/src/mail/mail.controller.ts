@@ -14,13 +14,13 @@ export class MailController {
   constructor(private readonly mail: MailService) {}
 
   @Get()
-  @Roles('admin')
+  @Roles('mail.manage')
   list(@Query() q: OutboxQuery): Promise<OutboxMessageDto[]> {
     return this.mail.list(q.status, q.limit);
   }
 
   @Post(':id/retry')
-  @Roles('admin')
+  @Roles('mail.manage')
   retry(@Param('id', UuidParam) id: string): Promise<OutboxMessageDto> {
     return this.mail.retry(id, new Date());
   }

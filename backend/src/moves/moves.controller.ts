@@ -18,79 +18,79 @@ export class MovesController {
   ) {}
 
   @Get()
-  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  @Roles('moves.read')
   list(@Query() q: ListMovesQuery, @CurrentUser() user: SessionUser): Promise<MovesPage> {
     return this.moves.list(q, user);
   }
 
   @Get('stage-counts')
-  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  @Roles('moves.read')
   stageCounts(@CurrentUser() user: SessionUser): Promise<StageCounts> {
     return this.moves.stageCounts(user);
   }
 
   @Post()
-  @Roles('admin', 'dispatcher')
+  @Roles('moves.edit')
   create(@Body() dto: CreateMoveDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
     return this.moves.create(dto, user, new Date());
   }
 
   @Post('preview')
-  @Roles('admin', 'dispatcher')
+  @Roles('moves.edit')
   preview(@Body() dto: PreviewDto): Promise<AssessmentDto> {
     return this.moves.preview(dto, new Date());
   }
 
   @Get(':id')
-  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  @Roles('moves.read')
   async get(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<MoveDto> {
     return toMoveDto(await this.moves.get(id, user));
   }
 
   @Patch(':id')
-  @Roles('admin', 'dispatcher')
+  @Roles('moves.edit')
   update(@Param('id', UuidParam) id: string, @Body() dto: UpdateMoveDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
     return this.moves.update(id, dto, user, new Date());
   }
 
   @Get(':id/assessment')
-  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  @Roles('moves.read')
   assessment(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<AssessmentDto> {
     return this.moves.assessment(id, user, new Date());
   }
 
   @Post(':id/stage')
-  @Roles('admin', 'dispatcher')
+  @Roles('moves.edit')
   stage(@Param('id', UuidParam) id: string, @Body() dto: StageChangeDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
     return this.workflow.transition(id, dto, user, new Date());
   }
 
   @Post(':id/reopen')
-  @Roles('admin', 'dispatcher')
+  @Roles('moves.edit')
   reopen(@Param('id', UuidParam) id: string, @Body() dto: ReopenDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
     return this.workflow.reopen(id, dto, user, new Date());
   }
 
   @Get(':id/reassessment')
-  @Roles('admin', 'dispatcher', 'permit_clerk')
+  @Roles('moves.compareRules')
   reassessment(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<ReassessmentPreview> {
     return this.workflow.reassessmentPreview(id, user, new Date());
   }
 
   @Post(':id/reassess')
-  @Roles('admin', 'dispatcher')
+  @Roles('moves.edit')
   reassess(@Param('id', UuidParam) id: string, @Body() dto: ReassessDto, @CurrentUser() user: SessionUser): Promise<MoveDto> {
     return this.workflow.reassess(id, dto, user, new Date());
   }
 
   @Get(':id/schedule')
-  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  @Roles('moves.read')
   schedule(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<ScheduleDto> {
     return this.workflow.scheduleOf(id, user, new Date());
   }
 
   @Get(':id/history')
-  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  @Roles('moves.read')
   history(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<HistoryEntryDto[]> {
     return this.moves.history(id, user);
   }

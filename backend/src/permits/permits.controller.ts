@@ -25,64 +25,64 @@ export class PermitsController {
   ) {}
 
   @Get('permits')
-  @Roles('admin', 'dispatcher', 'permit_clerk')
+  @Roles('permits.queue')
   list(@Query() q: ListPermitsQuery, @CurrentUser() user: SessionUser): Promise<PermitsPage> {
     return this.permits.list(q, user, new Date());
   }
 
   @Get('permits/overview')
-  @Roles('admin', 'dispatcher', 'permit_clerk')
+  @Roles('permits.queue')
   overview(): Promise<PermitOverviewDto> {
     return this.permits.overview(new Date());
   }
 
   @Get('permits/assignees')
-  @Roles('admin', 'dispatcher', 'permit_clerk')
+  @Roles('permits.queue')
   assignees(): Promise<{ id: string; name: string; role: string }[]> {
     return this.permits.assignees();
   }
 
   @Post('permits/assign')
   @HttpCode(200)
-  @Roles('admin', 'permit_clerk')
+  @Roles('permits.work')
   assign(@Body() dto: AssignPermitsDto, @CurrentUser() user: SessionUser): Promise<AssignPermitsResponse> {
     return this.permits.assign(dto, user, new Date());
   }
 
   @Post('permits/expiry-scan')
   @HttpCode(200)
-  @Roles('admin', 'permit_clerk')
+  @Roles('permits.work')
   expiryScan(): Promise<ExpiryScanResult> {
     return this.scan.scan(new Date());
   }
 
   @Get('permits/:id')
-  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  @Roles('permits.read')
   get(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<PermitDto> {
     return this.permits.get(id, user, new Date());
   }
 
   @Patch('permits/:id')
-  @Roles('admin', 'permit_clerk')
+  @Roles('permits.work')
   update(@Param('id', UuidParam) id: string, @Body() dto: UpdatePermitDto, @CurrentUser() user: SessionUser): Promise<PermitDto> {
     return this.permits.update(id, dto, user, new Date());
   }
 
   @Get('moves/:id/permits')
-  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  @Roles('permits.read')
   forMove(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<PermitDto[]> {
     return this.permits.forMove(id, user, new Date());
   }
 
   @Post('moves/:id/permits/sync')
   @HttpCode(200)
-  @Roles('admin', 'dispatcher', 'permit_clerk')
+  @Roles('permits.sync')
   sync(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<SyncPermitsResponse> {
     return this.permits.syncForMove(id, user, new Date());
   }
 
   @Post('permits/:id/documents')
-  @Roles('admin', 'permit_clerk')
+  @Roles('permits.work')
   @ApiConsumes('multipart/form-data')
   @ApiBody({
     description: "The state's permit as one PDF file",
@@ -94,7 +94,7 @@ export class PermitsController {
   }
 
   @Get('permits/:id/documents/:docId')
-  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  @Roles('permits.read')
   async download(@Param('id', UuidParam) id: string, @Param('docId', UuidParam) docId: string, @CurrentUser() user: SessionUser): Promise<StreamableFile> {
     const f = await this.documents.open(id, docId, user);
     return new StreamableFile(f.stream, {
@@ -105,13 +105,13 @@ export class PermitsController {
   }
 
   @Post('permits/:id/payments')
-  @Roles('admin', 'permit_clerk')
+  @Roles('permits.work')
   pay(@Param('id', UuidParam) id: string, @Body() dto: PayPermitDto, @CurrentUser() user: SessionUser): Promise<PaymentDto> {
     return this.payments.pay(id, dto, user, new Date());
   }
 
   @Post('permits/:id/refunds')
-  @Roles('admin', 'permit_clerk')
+  @Roles('permits.work')
   refund(@Param('id', UuidParam) id: string, @Body() dto: RefundPermitDto, @CurrentUser() user: SessionUser): Promise<PaymentDto> {
     return this.payments.refund(id, dto, user, new Date());
   }

@@ -13,31 +13,31 @@ export class RulebookController {
   constructor(private readonly rulebook: RulebookService) {}
 
   @Get('coverage')
-  @Roles('admin', 'dispatcher', 'permit_clerk')
+  @Roles('rulebook.read')
   coverage(): Promise<RulebookCoverage> {
     return this.rulebook.coverage();
   }
 
   @Get('jurisdictions')
-  @Roles('admin', 'dispatcher', 'permit_clerk')
+  @Roles('rulebook.read')
   list(): Promise<JurisdictionSummaryDto[]> {
     return this.rulebook.list();
   }
 
   @Get('jurisdictions/:code')
-  @Roles('admin', 'dispatcher', 'permit_clerk')
+  @Roles('rulebook.read')
   current(@Param('code') code: string): Promise<RuleVersionDto> {
     return this.rulebook.current(code);
   }
 
   @Get('jurisdictions/:code/versions')
-  @Roles('admin', 'dispatcher', 'permit_clerk')
+  @Roles('rulebook.read')
   history(@Param('code') code: string): Promise<RuleVersionDto[]> {
     return this.rulebook.history(code);
   }
 
   @Put('jurisdictions/:code')
-  @Roles('admin')
+  @Roles('rulebook.edit')
   update(@Param('code') code: string, @Body() dto: UpdateRuleDto, @CurrentUser() user: SessionUser): Promise<RuleVersionDto> {
     return this.rulebook.update(code, dto.record, dto.note, user);
   }

@@ -16,13 +16,13 @@ export class RunSheetsController {
   constructor(private readonly sheets: RunSheetsService) {}
 
   @Get('run-sheet')
-  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  @Roles('runSheets.read')
   get(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<RunSheetDto> {
     return this.sheets.build(id, user, new Date());
   }
 
   @Get('run-sheet.pdf')
-  @Roles('admin', 'dispatcher', 'permit_clerk', 'driver')
+  @Roles('runSheets.read')
   async pdf(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser, @Res() res: Response): Promise<void> {
     const sheet = await this.sheets.build(id, user, new Date());
     const doc = renderRunSheetPdf(sheet);
@@ -33,19 +33,19 @@ export class RunSheetsController {
   }
 
   @Get('departure-checks')
-  @Roles('admin', 'dispatcher', 'driver')
+  @Roles('departureChecks.read')
   checks(@Param('id', UuidParam) id: string, @CurrentUser() user: SessionUser): Promise<DepartureChecksDto[]> {
     return this.sheets.checksHistory(id, user);
   }
 
   @Post('departure-checks')
-  @Roles('driver')
+  @Roles('departureChecks.record')
   submit(@Param('id', UuidParam) id: string, @Body() dto: DepartureChecksDtoIn, @CurrentUser() user: SessionUser): Promise<DepartureChecksDto> {
     return this.sheets.submitChecks(id, dto, user, new Date());
   }
 
   @Post('departure-checks/:checksId/override')
-  @Roles('admin', 'dispatcher')
+  @Roles('departureChecks.override')
   override(
     @Param('id', UuidParam) id: string,
     @Param('checksId', UuidParam) checksId: string,
@@ -56,7 +56,7 @@ export class RunSheetsController {
   }
 
   @Post('run-sheet/acknowledgement')
-  @Roles('driver')
+  @Roles('departureChecks.record')
   acknowledge(@Param('id', UuidParam) id: string, @Body() dto: AcknowledgeDto, @CurrentUser() user: SessionUser): Promise<RunSheetDto> {
     return this.sheets.acknowledge(id, dto, user, new Date());
   }

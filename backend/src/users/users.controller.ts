@@ -14,26 +14,26 @@ export class UsersController {
   constructor(private readonly users: UsersService) {}
 
   @Get()
-  @Roles('admin')
+  @Roles('users.manage')
   list(@Query() q: ListUsersQuery): Promise<Page<UserDto>> {
     return this.users.list(q);
   }
 
   /** Active drivers, for assigning a driver to a move. */
   @Get('drivers')
-  @Roles('admin', 'dispatcher')
+  @Roles('drivers.read')
   drivers(): Promise<{ id: string; name: string; email: string }[]> {
     return this.users.activeDrivers();
   }
 
   @Post()
-  @Roles('admin')
+  @Roles('users.manage')
   create(@Body() dto: CreateUserDto): Promise<UserDto> {
     return this.users.create(dto);
   }
 
   @Patch(':id')
-  @Roles('admin')
+  @Roles('users.manage')
   update(@Param('id', UuidParam) id: string, @Body() dto: UpdateUserDto, @CurrentUser() actor: SessionUser): Promise<UserDto> {
     return this.users.update(id, dto, actor);
   }

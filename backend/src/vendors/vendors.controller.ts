@@ -14,25 +14,25 @@ export class VendorsController {
   constructor(private readonly vendors: VendorsService) {}
 
   @Get()
-  @Roles('admin', 'dispatcher')
+  @Roles('vendors.manage')
   list(@Query() q: VendorsQueryDto): Promise<VendorDto[]> {
     return this.vendors.list(q, new Date());
   }
 
   @Get(':id')
-  @Roles('admin', 'dispatcher')
+  @Roles('vendors.manage')
   async get(@Param('id', UuidParam) id: string): Promise<VendorDto> {
     return toVendorDto(await this.vendors.get(id), new Date());
   }
 
   @Post()
-  @Roles('admin', 'dispatcher')
+  @Roles('vendors.manage')
   create(@Body() dto: VendorInputDto, @CurrentUser() user: SessionUser): Promise<VendorDto> {
     return this.vendors.create(dto, user, new Date());
   }
 
   @Put(':id')
-  @Roles('admin', 'dispatcher')
+  @Roles('vendors.manage')
   update(@Param('id', UuidParam) id: string, @Body() dto: UpdateVendorDto, @CurrentUser() user: SessionUser): Promise<VendorDto> {
     return this.vendors.update(id, dto, user, new Date());
   }

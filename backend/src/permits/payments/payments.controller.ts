@@ -25,14 +25,14 @@ export class PaymentsController {
 
   @Get()
   @ApiBearerAuth()
-  @Roles('admin', 'dispatcher', 'permit_clerk')
+  @Roles('payments.read')
   ledger(@Query() q: ListPaymentsQuery, @CurrentUser() user: SessionUser): Promise<PaymentsPage> {
     return this.payments.ledger(q, user);
   }
 
   @Get('export.csv')
   @ApiBearerAuth()
-  @Roles('admin', 'dispatcher', 'permit_clerk')
+  @Roles('payments.read')
   async csv(@Query() q: ListPaymentsQuery, @Res({ passthrough: true }) res: Response): Promise<string> {
     const body = await this.payments.ledgerCsv(q);
     res.setHeader('content-type', 'text/csv; charset=utf-8');
