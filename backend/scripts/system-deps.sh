@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # The Debian packages Amberline's scripts run: PostgreSQL's server (npm start, npm test) and Chromium (the browser
 # tests). usage: system-deps.sh postgresql [chromium]
-# As root with apt-get: installs what is missing. Otherwise: says exactly what to install and fails.
+# As root with apt-get: installs what is missing (unless SYSTEM_DEPS_INSTALL=no). Otherwise: says exactly what to
+# install and fails.
 set -euo pipefail
 missing=()
 for what in "$@"; do
@@ -16,7 +17,7 @@ for what in "$@"; do
   esac
 done
 [ ${#missing[@]} -eq 0 ] && exit 0
-if [ "$(id -u)" = 0 ] && command -v apt-get >/dev/null 2>&1; then
+if [ "$(id -u)" = 0 ] && command -v apt-get >/dev/null 2>&1 && [ "${SYSTEM_DEPS_INSTALL:-yes}" != no ]; then
   echo "amberline: installing Debian packages: ${missing[*]} (once; a few minutes)"
   export DEBIAN_FRONTEND=noninteractive
   apt-get update -qq
