@@ -13,6 +13,7 @@ export * from './types/rulebook';
 export * from './types/moves';
 export * from './geo/jurisdictions';
 export * from './types/permits';
+export * from './permits';
 export * from './types/run-sheets';
 export * from './types/escorts';
 export * from './escorts/escort-slots';

@@ -1,0 +1,2 @@
+export * from './file-by';
+export * from './permit-rules';
