@@ -14,7 +14,7 @@ import {
 import dayjs from 'dayjs';
 import { AxleChart, axleBars } from '../../../components/axle-chart';
 import { Caution } from '../../../components/caution';
-import { LoadDiagram } from '../../../components/load-diagram';
+import { LoadDiagram } from '../../../components/diagram/load-diagram';
 import { useTractor } from '../../../features/fleet/api/get-tractor';
 import { useTrailer } from '../../../features/fleet/api/get-trailer';
 import { MoveEscorts } from '../../../features/escorts/components/move-escorts';

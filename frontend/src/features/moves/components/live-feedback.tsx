@@ -4,7 +4,7 @@ import { Alert, Card, Grid, Spin, Tabs, Typography } from 'antd';
 import { minimumTiedowns, type AssessmentDto, type MoveInput, type PlanCheckResult, type TractorDto, type TrailerDto } from '@amberline/common';
 import { AxleChart, axleBars } from '../../../components/axle-chart';
 import { Caution } from '../../../components/caution';
-import { LoadDiagram } from '../../../components/load-diagram';
+import { LoadDiagram } from '../../../components/diagram/load-diagram';
 import type { ApiError } from '../../../lib/api-client';
 import type { InstantAxles } from '../draft';
 import { JurisdictionAssessments } from './jurisdiction-assessment';
