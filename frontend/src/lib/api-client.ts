@@ -1,4 +1,4 @@
-import type { ApiErrorBody } from '@amberline/common';
+import { DOMAIN_ERRORS, type ApiErrorBody, type DomainErrorCode } from '@amberline/common';
 
 const TOKEN_KEY = 'amberline.token';
 
@@ -15,6 +15,10 @@ export class ApiError extends Error {
     readonly body: ApiErrorBody,
   ) {
     super(body.message);
+  }
+  /** Why the desk refused, in the domain's terms (`version_conflict`, `run_sheet_changed`, …); absent for other errors. */
+  get code(): DomainErrorCode | undefined {
+    return this.body.code;
   }
   fieldErrors(): { name: string; errors: string[] }[] {
     return Array.isArray(this.body.details) ? this.body.details.map((d) => ({ name: d.field, errors: [d.reason] })) : [];
@@ -68,4 +72,22 @@ export async function api<T>(path: string, init: RequestInit & { json?: unknown 
     throw err;
   }
   return data as T;
+}
+
+/**
+ * Someone else saved the record after it was read. By its code; a server that does not send codes yet says it with
+ * a 409 carrying the record's current version.
+ */
+export function isVersionConflict(e: unknown): boolean {
+  if (!(e instanceof ApiError)) return false;
+  if (e.code !== undefined) return e.code === DOMAIN_ERRORS.VERSION_CONFLICT;
+  const details = e.body.details as { currentVersion?: unknown } | undefined;
+  return e.status === 409 && !Array.isArray(details) && details?.currentVersion !== undefined;
+}
+
+/** The run sheet changed after it was opened. By its code; without codes, a 409 with no details. */
+export function isRunSheetChanged(e: unknown): boolean {
+  if (!(e instanceof ApiError)) return false;
+  if (e.code !== undefined) return e.code === DOMAIN_ERRORS.RUN_SHEET_CHANGED;
+  return e.status === 409 && e.body.details === undefined;
 }

@@ -33,7 +33,7 @@ import {
   type RoadType,
   type WeightSource,
 } from '@amberline/common';
-import { ApiError } from '../../../lib/api-client';
+import { ApiError, isVersionConflict } from '../../../lib/api-client';
 import { applyApiFieldErrors } from '../../../components/form-errors';
 import { to } from '../../../config/paths';
 import { useTractors } from '../../fleet/api/get-tractors';
@@ -141,8 +141,7 @@ export function MoveForm({ move }: { move?: MoveDto }) {
   const handleApiError = (e: Error) => {
     if (!(e instanceof ApiError)) return message.error(e.message);
     if (e.status === 409 && move) {
-      const details = e.body.details as { currentVersion?: number } | undefined;
-      if (details?.currentVersion !== undefined || /changed by someone else/i.test(e.message)) setStale(true);
+      if (isVersionConflict(e)) setStale(true);
       else message.error(e.message);
       return;
     }

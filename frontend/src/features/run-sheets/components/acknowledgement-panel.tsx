@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { Alert, App, Button, Typography } from 'antd';
 import { useQueryClient } from '@tanstack/react-query';
 import type { RunSheetDto } from '@amberline/common';
-import { ApiError } from '../../../lib/api-client';
+import { isRunSheetChanged } from '../../../lib/api-client';
 import { useAcknowledgeRunSheet } from '../api/acknowledge-run-sheet';
 import { runSheetQueryOptions } from '../api/get-run-sheet';
 import { INFO_STYLE, SUCCESS_STYLE } from './section';
@@ -24,7 +24,7 @@ export function AcknowledgementPanel({ sheet, canAcknowledge }: { sheet: RunShee
       setChanged(null);
       message.success('Run sheet acknowledged.');
     } catch (e) {
-      if (e instanceof ApiError && e.status === 409 && /changed/i.test(e.message)) setChanged(e.message);
+      if (isRunSheetChanged(e)) setChanged((e as Error).message);
       else message.error(e instanceof Error ? e.message : 'The acknowledgement could not be sent.');
     }
   };
