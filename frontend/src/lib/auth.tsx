@@ -1,8 +1,7 @@
 import { createContext, useCallback, useContext, useEffect, useMemo, type ReactNode } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
 import type { LoginRequest, SessionUser } from '@amberline/common';
-import { login as loginRequest } from '../features/auth/api/login';
-import { meQueryOptions, useMe } from '../features/auth/api/get-me';
+import { login as loginRequest, meQueryOptions, useMe } from './auth-api';
 import { ApiError, setUnauthorizedHandler, tokenStore } from './api-client';
 
 /** The signed-in user as last confirmed by the server: kept through an outage, so a 503 does not sign anyone out. */

@@ -3,7 +3,8 @@ import { Button, Card, Col, Input, Row, Select, Space, Statistic, Table, Typogra
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { JURISDICTIONS, MOVE_STAGE_LABELS, MOVE_STAGES, type MoveStage, type MoveSummaryDto } from '@amberline/common';
 import dayjs from 'dayjs';
-import { useMoves, type MovesFilter } from '../../../features/moves/api/get-moves';
+import { useMoves } from '../../../features/moves/api/get-moves';
+import type { MovesFilter } from '../../../lib/shared-queries';
 import { useStageCounts } from '../../../features/moves/api/get-stage-counts';
 import { MoveFlags } from '../../../features/moves/components/move-flags';
 import { STAGE_COLORS, StageTag } from '../../../features/moves/components/stage-tag';

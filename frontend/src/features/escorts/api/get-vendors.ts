@@ -1,6 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import type { VendorDto, VendorsQuery } from '@amberline/common';
 import { api } from '../../../lib/api-client';
+import { escortKeys } from './keys';
 
 export const getVendors = (f: VendorsQuery) => {
   const q = new URLSearchParams();
@@ -11,6 +12,6 @@ export const getVendors = (f: VendorsQuery) => {
 };
 
 export const vendorsQueryOptions = (f: VendorsQuery) =>
-  queryOptions({ queryKey: ['vendors', 'list', f], queryFn: () => getVendors(f), placeholderData: keepPreviousData });
+  queryOptions({ queryKey: escortKeys.vendorList(f), queryFn: () => getVendors(f), placeholderData: keepPreviousData });
 
 export const useVendors = (f: VendorsQuery, enabled = true) => useQuery({ ...vendorsQueryOptions(f), enabled });

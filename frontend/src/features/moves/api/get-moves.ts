@@ -1,19 +1,5 @@
-import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import type { MoveStage, MovesPage, MovesQuery } from '@amberline/common';
-import { api } from '../../../lib/api-client';
+import { useQuery } from '@tanstack/react-query';
+import { movesQueryOptions, type MovesFilter } from '../../../lib/shared-queries';
 
-export type MovesFilter = Required<Pick<MovesQuery, 'page' | 'pageSize'>> & { stage?: MoveStage; search?: string; sort?: MovesQuery['sort']; jurisdiction?: string };
-
-export const getMoves = (f: MovesFilter) => {
-  const q = new URLSearchParams({ page: String(f.page), pageSize: String(f.pageSize) });
-  if (f.stage) q.set('stage', f.stage);
-  if (f.search) q.set('search', f.search);
-  if (f.sort) q.set('sort', f.sort);
-  if (f.jurisdiction) q.set('jurisdiction', f.jurisdiction);
-  return api<MovesPage>(`/moves?${q}`);
-};
-
-export const movesQueryOptions = (f: MovesFilter) =>
-  queryOptions({ queryKey: ['moves', 'list', f], queryFn: () => getMoves(f), placeholderData: keepPreviousData });
-
+/** A page of moves; the fetcher and its query options are shared (the run sheets list moves too). */
 export const useMoves = (f: MovesFilter) => useQuery(movesQueryOptions(f));

@@ -2,6 +2,7 @@ import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query'
 import type { PaymentsPage, PaymentsQuery } from '@amberline/common';
 import { api } from '../../../lib/api-client';
 import { downloadFile } from './download-file';
+import { permitKeys } from './keys';
 
 export type PaymentsFilter = Required<Pick<PaymentsQuery, 'page' | 'pageSize'>> & Omit<PaymentsQuery, 'page' | 'pageSize'>;
 
@@ -14,7 +15,7 @@ const params = (f: Partial<PaymentsFilter>) => {
 export const getPayments = (f: PaymentsFilter) => api<PaymentsPage>(`/payments?${params(f)}`);
 
 export const paymentsQueryOptions = (f: PaymentsFilter) =>
-  queryOptions({ queryKey: ['payments', 'list', f], queryFn: () => getPayments(f), placeholderData: keepPreviousData });
+  queryOptions({ queryKey: permitKeys.paymentList(f), queryFn: () => getPayments(f), placeholderData: keepPreviousData });
 
 export const usePayments = (f: PaymentsFilter) => useQuery(paymentsQueryOptions(f));
 

@@ -1,6 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import type { PermitsPage, PermitsQuery } from '@amberline/common';
 import { api } from '../../../lib/api-client';
+import { permitKeys } from './keys';
 
 export type PermitsFilter = Required<Pick<PermitsQuery, 'page' | 'pageSize' | 'sort'>> & Omit<PermitsQuery, 'page' | 'pageSize' | 'sort'>;
 
@@ -11,6 +12,6 @@ export const getPermits = (f: PermitsFilter) => {
 };
 
 export const permitsQueryOptions = (f: PermitsFilter) =>
-  queryOptions({ queryKey: ['permits', 'list', f], queryFn: () => getPermits(f), placeholderData: keepPreviousData });
+  queryOptions({ queryKey: permitKeys.list(f), queryFn: () => getPermits(f), placeholderData: keepPreviousData });
 
 export const usePermits = (f: PermitsFilter) => useQuery(permitsQueryOptions(f));

@@ -1,7 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { AcknowledgeRequest, RunSheetDto } from '@amberline/common';
 import { api } from '../../../lib/api-client';
-import { runSheetQueryOptions } from './get-run-sheet';
+import { sharedKeys } from '../../../lib/shared-queries';
+import { runSheetKeys } from './keys';
 
 export const acknowledgeRunSheet = ({ moveId, ...body }: AcknowledgeRequest & { moveId: string }) =>
   api<RunSheetDto>(`/moves/${moveId}/run-sheet/acknowledgement`, { method: 'POST', json: body });
@@ -12,8 +13,8 @@ export const useAcknowledgeRunSheet = () => {
   return useMutation({
     mutationFn: acknowledgeRunSheet,
     onSuccess: (sheet, vars) => {
-      qc.setQueryData(runSheetQueryOptions(vars.moveId).queryKey, sheet);
-      return qc.invalidateQueries({ queryKey: ['moves'] });
+      qc.setQueryData(runSheetKeys.one(vars.moveId), sheet);
+      return qc.invalidateQueries({ queryKey: sharedKeys.moves() });
     },
   });
 };

@@ -1,6 +1,6 @@
 import { useQueries } from '@tanstack/react-query';
 import type { MoveStage, MoveSummaryDto, Role } from '@amberline/common';
-import { movesQueryOptions } from '../../moves/api/get-moves';
+import { movesQueryOptions } from '../../../lib/shared-queries';
 
 /** The stages at which the office looks at run sheets: ready to leave, or on the road. */
 export const OFFICE_RUN_SHEET_STAGES: MoveStage[] = ['permits_received', 'escorts_booked', 'running'];

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { DepartureChecksDto, OverrideChecksRequest } from '@amberline/common';
 import { api } from '../../../lib/api-client';
-import { runSheetQueryOptions } from './get-run-sheet';
+import { runSheetKeys } from './keys';
 
 export const overrideDepartureChecks = ({ moveId, checksId, ...body }: OverrideChecksRequest & { moveId: string; checksId: string }) =>
   api<DepartureChecksDto>(`/moves/${moveId}/departure-checks/${checksId}/override`, { method: 'POST', json: body });
@@ -11,6 +11,6 @@ export const useOverrideDepartureChecks = () => {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: overrideDepartureChecks,
-    onSuccess: (_d, vars) => qc.invalidateQueries({ queryKey: runSheetQueryOptions(vars.moveId).queryKey }),
+    onSuccess: (_d, vars) => qc.invalidateQueries({ queryKey: runSheetKeys.one(vars.moveId) }),
   });
 };

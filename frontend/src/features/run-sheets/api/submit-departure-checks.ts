@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { DepartureChecksDto, DepartureChecksRequest } from '@amberline/common';
 import { api } from '../../../lib/api-client';
-import { runSheetQueryOptions } from './get-run-sheet';
+import { runSheetKeys } from './keys';
 
 export const submitDepartureChecks = ({ moveId, ...body }: DepartureChecksRequest & { moveId: string }) =>
   api<DepartureChecksDto>(`/moves/${moveId}/departure-checks`, { method: 'POST', json: body });
@@ -11,6 +11,6 @@ export const useSubmitDepartureChecks = () => {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: submitDepartureChecks,
-    onSuccess: (_d, vars) => qc.invalidateQueries({ queryKey: runSheetQueryOptions(vars.moveId).queryKey }),
+    onSuccess: (_d, vars) => qc.invalidateQueries({ queryKey: runSheetKeys.one(vars.moveId) }),
   });
 };

@@ -4,8 +4,8 @@ import { useQueryClient } from '@tanstack/react-query';
 import type { RunSheetDto } from '@amberline/common';
 import { isRunSheetChanged } from '../../../lib/api-client';
 import { useAcknowledgeRunSheet } from '../api/acknowledge-run-sheet';
-import { runSheetQueryOptions } from '../api/get-run-sheet';
 import { INFO_STYLE, SUCCESS_STYLE } from './section';
+import { runSheetKeys } from '../api/keys';
 
 /** Where the acknowledgement stands, and (for the driver) the button that acknowledges this version of the sheet. */
 export function AcknowledgementPanel({ sheet, canAcknowledge }: { sheet: RunSheetDto; canAcknowledge: boolean }) {
@@ -30,7 +30,7 @@ export function AcknowledgementPanel({ sheet, canAcknowledge }: { sheet: RunShee
   };
   const reload = async () => {
     setChanged(null);
-    await qc.invalidateQueries({ queryKey: runSheetQueryOptions(sheet.move.id).queryKey });
+    await qc.invalidateQueries({ queryKey: runSheetKeys.one(sheet.move.id) });
     window.scrollTo({ top: 0 });
   };
 

@@ -1,6 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import type { Page, Role, UserDto } from '@amberline/common';
 import { api } from '../../../lib/api-client';
+import { userKeys } from './keys';
 
 export type UsersFilter = { page: number; pageSize: number; role?: Role; search?: string };
 
@@ -12,6 +13,6 @@ export const getUsers = (f: UsersFilter) => {
 };
 
 export const usersQueryOptions = (f: UsersFilter) =>
-  queryOptions({ queryKey: ['users', 'list', f], queryFn: () => getUsers(f), placeholderData: keepPreviousData });
+  queryOptions({ queryKey: userKeys.list(f), queryFn: () => getUsers(f), placeholderData: keepPreviousData });
 
 export const useUsers = (f: UsersFilter) => useQuery(usersQueryOptions(f));

@@ -1,0 +1,5 @@
+/** The run sheets' query keys. */
+export const runSheetKeys = {
+  all: () => ['run-sheets'] as const,
+  one: (moveId: string) => ['run-sheets', 'one', moveId] as const,
+};
