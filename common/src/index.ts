@@ -2,6 +2,8 @@ export * from './auth/roles';
 export * from './auth/permissions';
 export * from './moves/stages';
 export * from './moves/schedule';
+export * from './moves/travel-dates';
+export * from './run-sheets/departure-checks';
 export * from './errors/error-codes';
 export * from './errors/domain-errors';
 export * from './validation/limits';
