@@ -28,7 +28,7 @@ import { StageControl } from '../../../features/moves/components/stage-control';
 import { KeptRules } from '../../../features/moves/components/kept-rules';
 import { ScheduleTimeline } from '../../../features/moves/components/schedule-timeline';
 import { localInstant } from '../../../lib/time';
-import { StageTag } from '../../../features/moves/components/stage-tag';
+import { StageTag } from '../../../components/stage-tag';
 import { MovePermits } from '../../../features/permits/components/move-permits';
 import { paths, to } from '../../../config/paths';
 import { accessFor } from '../../../lib/access';
@@ -246,7 +246,7 @@ export function MovePage() {
         <MovePermits moveId={m.id} />
       </Card>
       <Card id="escorts" title="Escorts" style={{ marginBottom: 16 }} data-testid="section-escorts">
-        <MoveEscorts moveId={m.id} />
+        <MoveEscorts moveId={m.id} origin={m.origin} />
       </Card>
       <Card id="history" title="History" data-testid="section-history">
         <MoveHistory moveId={m.id} />

@@ -7,7 +7,7 @@ import { useMoves } from '../../../features/moves/api/get-moves';
 import type { MovesFilter } from '../../../lib/shared-queries';
 import { useStageCounts } from '../../../features/moves/api/get-stage-counts';
 import { MoveFlags } from '../../../features/moves/components/move-flags';
-import { STAGE_COLORS, StageTag } from '../../../features/moves/components/stage-tag';
+import { STAGE_COLORS, StageTag } from '../../../components/stage-tag';
 import { paths, to } from '../../../config/paths';
 import { accessFor } from '../../../lib/access';
 import { useAuth } from '../../../lib/auth';

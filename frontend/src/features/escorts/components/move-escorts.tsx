@@ -8,7 +8,6 @@ import {
 import { applyApiFieldErrors } from '../../../components/form-errors';
 import { accessFor } from '../../../lib/access';
 import { useAuth } from '../../../lib/auth';
-import { useMove } from '../../moves/api/get-move';
 import { useCancelEscort } from '../api/cancel-escort';
 import { useMoveEscorts } from '../api/get-move-escorts';
 import { useVendors } from '../api/get-vendors';
@@ -19,7 +18,8 @@ const stateName = (c: string) => jurisdictionByCode(c)?.name ?? c;
 const slotKey = (s: { position: string; seat: number }) => `${s.position}:${s.seat}`;
 
 /** The escorts of one move, on the move page: positions the assessment requires, the bookings and their answers, and the request form. */
-export function MoveEscorts({ moveId }: { moveId: string }) {
+/** The move's escort positions and bookings; `origin` is where a new request's meeting point starts. */
+export function MoveEscorts({ moveId, origin }: { moveId: string; origin: string }) {
   const { user } = useAuth();
   const canBook = accessFor(user?.role).canBookEscorts;
   const escorts = useMoveEscorts(moveId);
@@ -149,7 +149,7 @@ export function MoveEscorts({ moveId }: { moveId: string }) {
           />
         </>
       )}
-      {requesting && <RequestDrawer escorts={d} initialSlot={requesting} moveId={moveId} onClose={() => setRequesting(null)} />}
+      {requesting && <RequestDrawer escorts={d} initialSlot={requesting} moveId={moveId} origin={origin} onClose={() => setRequesting(null)} />}
       <CancelModal moveId={moveId} booking={cancelling} onClose={() => setCancelling(null)} />
     </div>
   );
@@ -172,10 +172,9 @@ function AnswerText({ booking: b }: { booking: EscortBookingDto }) {
 
 type RequestValues = { slot: string; jurisdictions: string[]; vendorId: string; meetingPoint: string; meetingTime?: string; notes?: string };
 
-function RequestDrawer({ escorts, initialSlot, moveId, onClose }: { escorts: MoveEscortsDto; initialSlot: string; moveId: string; onClose: () => void }) {
+function RequestDrawer({ escorts, initialSlot, moveId, origin, onClose }: { escorts: MoveEscortsDto; initialSlot: string; moveId: string; origin: string; onClose: () => void }) {
   const { message } = App.useApp();
   const [form] = Form.useForm<RequestValues>();
-  const move = useMove(moveId);
   const vendors = useVendors({});
   const request = useRequestEscort();
   const [unplaced, setUnplaced] = useState<string[]>([]);
@@ -215,7 +214,7 @@ function RequestDrawer({ escorts, initialSlot, moveId, onClose }: { escorts: Mov
         form={form}
         layout="vertical"
         onFinish={submit}
-        initialValues={{ slot: initialSlot, jurisdictions: openCodes, meetingPoint: move.data?.origin ?? '' }}
+        initialValues={{ slot: initialSlot, jurisdictions: openCodes, meetingPoint: origin }}
         onValuesChange={(changed) => {
           if ('slot' in changed) {
             const s = escorts.slots.find((x) => slotKey(x) === changed.slot);

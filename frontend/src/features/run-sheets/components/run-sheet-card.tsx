@@ -2,7 +2,7 @@ import { Card, Tag, Typography } from 'antd';
 import { Link } from 'react-router-dom';
 import type { MoveSummaryDto } from '@amberline/common';
 import { to } from '../../../config/paths';
-import { StageTag } from '../../moves/components/stage-tag';
+import { StageTag } from '../../../components/stage-tag';
 import { calendarDate } from '../format';
 
 /** One move in the run-sheet list: where and when, and a way into its sheet. */

@@ -1,6 +1,6 @@
 import { Typography } from 'antd';
 import { TRAILER_TYPE_LABELS, type RunSheetDto, type TrailerType } from '@amberline/common';
-import { StageTag } from '../../moves/components/stage-tag';
+import { StageTag } from '../../../components/stage-tag';
 import { calendarDate } from '../format';
 import { Fact, Facts } from './section';
 
