@@ -2,14 +2,13 @@ import { createHash } from 'node:crypto';
 import { Injectable } from '@nestjs/common';
 import { LRUCache } from 'lru-cache';
 import {
-  defaultWll, PLANNING_CAUTION, planCheck, ANCHOR_KIND_LABELS,
+  defaultWll, PLANNING_CAUTION, planCheck, ANCHOR_KIND_LABELS, travelDates,
   type AssessmentDto, type MoveArticle, type PermitTerms, type PlanArticle, type PlanCheckResult, type PlanInput, type RouteSegmentDto, type TiedownSpec,
 } from '@amberline/common';
 import { fieldError } from '../core/app-exception';
-import type { Tractor } from '../fleet/entities/tractor.entity';
-import type { Trailer } from '../fleet/entities/trailer.entity';
 import { RulebookService } from '../rulebook/rulebook.service';
 import type { MoveSummary } from './entities/move.entity';
+import type { MoveTractor, MoveTrailer } from './moves.repository';
 
 /** The facts of a plan, whether saved on a move or still a draft. */
 export type PlanFacts = {
@@ -18,18 +17,15 @@ export type PlanFacts = {
   requestedDeparture: string;
   travelDays: number;
   sliderSettingFt?: number | null;
-  tractor: Tractor;
-  trailer: Trailer;
+  tractor: MoveTractor;
+  trailer: MoveTrailer;
 };
 
-/** Each day of travel, `YYYY-MM-DD`, from the departure date. */
-export function travelDates(departure: string, days: number): string[] {
-  const start = Date.parse(`${departure}T00:00:00Z`);
-  return Array.from({ length: days }, (_, i) => new Date(start + i * 86_400_000).toISOString().slice(0, 10));
-}
+/** Each day of travel from the departure date: the rule lives in common (`@amberline/common`); kept here for older imports. */
+export { travelDates };
 
 /** Resolves one planned tiedown to the WLL the engine credits, naming the field when it cannot. */
-export function resolveTiedown(t: MoveArticle['tiedowns'][number], trailer: Trailer, field: string): TiedownSpec {
+export function resolveTiedown(t: MoveArticle['tiedowns'][number], trailer: MoveTrailer, field: string): TiedownSpec {
   let wllLb = t.markedWllLb;
   if (wllLb === undefined) {
     try {

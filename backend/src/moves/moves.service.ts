@@ -1,20 +1,17 @@
 import { Injectable } from '@nestjs/common';
-import { DataSource, EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import {
-  dayPlan, MOVE_STAGES, type AssessmentDto, type HistoryEntryDto, type MoveDto, type MoveStage, type MoveSummaryDto, type MovesPage, type PermitTerms,
-  type SessionUser, type StageCounts,
+  dayPlan, DOMAIN_ERRORS, DomainError, MOVE_STAGES, travelDates,
+  type AssessmentDto, type HistoryEntryDto, type MoveDto, type MoveSummaryDto, type MovesPage, type PermitTerms, type SessionUser, type StageCounts,
 } from '@amberline/common';
 import { AuditService, diff } from '../audit/audit.service';
-import { entityColumns, entityFromRow, preparedQuery } from '../database/prepared';
-import { AppException, fieldError } from '../core/app-exception';
-import { Tractor } from '../fleet/entities/tractor.entity';
-import { Trailer } from '../fleet/entities/trailer.entity';
-import { User } from '../users/entities/user.entity';
-import { AssessmentService, summarize, travelDates } from './assessment.service';
+import { fieldError } from '../core/app-exception';
+import { AssessmentService, summarize } from './assessment.service';
 import { CreateMoveDto, ListMovesQuery, UpdateMoveDto } from './dto/move.dto';
 import { Move } from './entities/move.entity';
 import { RulebookService } from '../rulebook/rulebook.service';
 import { MoveExtensionsRegistry } from './move-extensions';
+import { MovesRepository, type MoveListRow, type MoveTractor, type MoveTrailer } from './moves.repository';
 import { resolveRoute } from './route-geo';
 
 /** Fields whose change alters the plan (dimensions, weights, equipment, route) and so affects permits. */
@@ -63,10 +60,14 @@ export function earliestAllowedDeparture(now: Date): string {
   return new Intl.DateTimeFormat('en-CA', { timeZone: 'America/Los_Angeles', year: 'numeric', month: '2-digit', day: '2-digit' }).format(now);
 }
 
+/** Someone else saved the move after the caller read it. */
+export const versionConflict = (current: number, yours: number, details?: Record<string, unknown>): DomainError =>
+  new DomainError(DOMAIN_ERRORS.VERSION_CONFLICT, `This move was changed by someone else (version ${current}, yours ${yours}); reload it`, details);
+
 @Injectable()
 export class MovesService {
   constructor(
-    private readonly ds: DataSource,
+    private readonly repo: MovesRepository,
     private readonly audit: AuditService,
     private readonly assessments: AssessmentService,
     private readonly extensions: MoveExtensionsRegistry,
@@ -75,42 +76,36 @@ export class MovesService {
 
   /** Loads a move with its equipment and driver. Drivers may only see moves assigned to them. */
   async get(id: string, viewer?: SessionUser, manager?: EntityManager): Promise<Move> {
-    const [row] = await preparedQuery<Record<string, unknown>>(manager ?? this.ds, this.getSql(), [id]);
-    const m = row ? this.fromRow(row) : null;
-    if (!m || (viewer?.role === 'driver' && m.driverId !== viewer.id)) throw new AppException(404, 'not_found', `No move ${id}`);
+    return this.visible(await this.repo.findWithEquipment(id, manager), id, viewer);
+  }
+
+  /** The move as `viewer` may see it: a move that is not there, or another driver's, is not found. */
+  visible(m: Move | null, id: string, viewer?: SessionUser): Move {
+    if (!m || (viewer?.role === 'driver' && m.driverId !== viewer.id)) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No move ${id}`);
     return m;
   }
 
-  /** The move with its equipment and driver in one prepared statement (the move page's and run sheet's read). */
-  private getSqlText?: string;
-  private getSql(): string {
-    const meta = (e: Function) => this.ds.getMetadata(e);
-    return (this.getSqlText ??= `
-      SELECT ${entityColumns(meta(Move), 'm')}, ${entityColumns(meta(Tractor), 't', 'tractor.')}, ${entityColumns(meta(Trailer), 'r', 'trailer.')},
-             ${entityColumns(meta(User), 'd', 'driver.')}
-        FROM moves m JOIN tractors t ON t.id = m.tractor_id JOIN trailers r ON r.id = m.trailer_id LEFT JOIN users d ON d.id = m.driver_id
-       WHERE m.id = $1`);
+  /**
+   * Locks the move for the rest of `manager`'s transaction and loads it as it is once the lock is held, with its
+   * equipment (not found when there is none). With `version`, the caller's copy must still be current.
+   */
+  async lockForUpdate(manager: EntityManager, id: string, version?: number): Promise<Move> {
+    const move = this.visible(await this.repo.lockForUpdate(manager, id), id);
+    if (version !== undefined && version !== move.version) throw versionConflict(move.version, version);
+    return move;
   }
 
-  private fromRow(row: Record<string, unknown>): Move {
-    const m = entityFromRow<Move>(this.ds.getMetadata(Move), row)!;
-    m.tractor = entityFromRow<Tractor>(this.ds.getMetadata(Tractor), row, 'tractor.') ?? undefined;
-    m.trailer = entityFromRow<Trailer>(this.ds.getMetadata(Trailer), row, 'trailer.') ?? undefined;
-    m.driver = entityFromRow<User>(this.ds.getMetadata(User), row, 'driver.');
-    return m;
-  }
-
-  private async equipment(m: EntityManager, tractorId: string, trailerId: string): Promise<{ tractor: Tractor; trailer: Trailer }> {
-    const tractor = await m.findOneBy(Tractor, { id: tractorId });
+  private async equipment(m: EntityManager, tractorId: string, trailerId: string): Promise<{ tractor: MoveTractor; trailer: MoveTrailer }> {
+    const tractor = await this.repo.tractor(tractorId, m);
     if (!tractor || !tractor.active) throw fieldError('tractorId', 'no active tractor with this id');
-    const trailer = await m.findOneBy(Trailer, { id: trailerId });
+    const trailer = await this.repo.trailer(trailerId, m);
     if (!trailer || !trailer.active) throw fieldError('trailerId', 'no active trailer with this id');
     return { tractor, trailer };
   }
 
   private async checkDriver(m: EntityManager, driverId: string | null | undefined): Promise<void> {
     if (!driverId) return;
-    const d = await m.findOneBy(User, { id: driverId });
+    const d = await this.repo.userStanding(driverId, m);
     if (!d || d.role !== 'driver' || !d.active) throw fieldError('driverId', 'no active driver with this id');
   }
 
@@ -123,7 +118,7 @@ export class MovesService {
     }
   }
 
-  private checkPlanFields(dto: Partial<CreateMoveDto>, trailer: Trailer, now: Date, departureChanged: boolean): void {
+  private checkPlanFields(dto: Partial<CreateMoveDto>, trailer: MoveTrailer, now: Date, departureChanged: boolean): void {
     if (dto.sliderSettingFt !== undefined && dto.sliderSettingFt !== null) {
       const s = trailer.spec.slider;
       if (!s) throw fieldError('sliderSettingFt', `trailer ${trailer.unitNumber} has no sliding axle`);
@@ -138,7 +133,7 @@ export class MovesService {
   }
 
   async preview(dto: CreateMoveDto, now: Date): Promise<AssessmentDto> {
-    const { tractor, trailer } = await this.equipment(this.ds.manager, dto.tractorId, dto.trailerId);
+    const { tractor, trailer } = await this.equipment(this.repo.manager, dto.tractorId, dto.trailerId);
     this.checkPlanFields(dto, trailer, now, false);
     const route = resolveRoute(dto.route);
     const a = await this.assessments.assess({ ...dto, route, tractor, trailer });
@@ -147,14 +142,14 @@ export class MovesService {
 
   async create(dto: CreateMoveDto, actor: SessionUser, now: Date): Promise<MoveDto> {
     const route = resolveRoute(dto.route);
-    const id = await this.ds.transaction(async (m) => {
+    const id = await this.repo.transaction(async (m) => {
       const { tractor, trailer } = await this.equipment(m, dto.tractorId, dto.trailerId);
       await this.checkDriver(m, dto.driverId);
       this.checkPlanFields(dto, trailer, now, true);
       this.checkDailyMiles(route, dto.travelDays, dto.dailyMiles);
       const a = await this.assessments.assess({ ...dto, route, tractor, trailer });
-      const [{ n }] = await m.query(`SELECT nextval('move_reference_seq')::int AS n`);
-      const move = m.create(Move, {
+      const n = await this.repo.nextReferenceNumber(m);
+      const saved = await this.repo.insert(m, {
         reference: `AM-${now.getUTCFullYear()}-${String(n).padStart(5, '0')}`,
         customer: dto.customer.trim(),
         customerRef: dto.customerRef?.trim() || null,
@@ -176,7 +171,6 @@ export class MovesService {
         summary: summarize(a.result),
         createdById: actor.id,
       });
-      const saved = await m.save(move);
       await this.audit.record(m, { moveId: saved.id, entity: 'move', entityId: saved.id, action: 'created', actorId: actor.id, after: auditView(saved) });
       return saved.id;
     });
@@ -184,16 +178,13 @@ export class MovesService {
   }
 
   async update(id: string, dto: UpdateMoveDto, actor: SessionUser, now: Date): Promise<MoveDto> {
-    await this.ds.transaction(async (m) => {
-      const before = await m.findOne(Move, { where: { id }, lock: { mode: 'pessimistic_write' } });
-      if (!before) throw new AppException(404, 'not_found', `No move ${id}`);
-      if (before.version !== dto.version) {
-        throw new AppException(409, 'conflict', `This move was changed by someone else (version ${before.version}, yours ${dto.version}); reload it`, { currentVersion: before.version });
-      }
-      if (before.stage === 'delivered' || before.stage === 'cancelled') throw new AppException(409, 'conflict', `A ${before.stage} move cannot be edited`);
+    await this.repo.transaction(async (m) => {
+      const before = await this.lockForUpdate(m, id);
+      if (before.version !== dto.version) throw versionConflict(before.version, dto.version, { currentVersion: before.version });
+      if (before.stage === 'delivered' || before.stage === 'cancelled') throw new DomainError(DOMAIN_ERRORS.RECORD_CLOSED, `A ${before.stage} move cannot be edited`);
       const { version, ...changes } = dto;
       void version;
-      const after = m.create(Move, { ...before });
+      const after = this.repo.copy(before);
       if (changes.route) {
         after.route = resolveRoute(changes.route);
         after.jurisdictions = [...new Set(after.route.map((s) => s.jurisdiction))];
@@ -203,6 +194,8 @@ export class MovesService {
         (after as unknown as Record<string, unknown>)[k] = k === 'articles' ? JSON.parse(JSON.stringify(v)) : v;
       }
       const { tractor, trailer } = await this.equipment(m, after.tractorId, after.trailerId);
+      after.tractor = tractor;
+      after.trailer = trailer;
       if (changes.driverId !== undefined) await this.checkDriver(m, changes.driverId);
       this.checkPlanFields({ ...changes, sliderSettingFt: after.sliderSettingFt }, trailer, now, changes.requestedDeparture !== undefined && changes.requestedDeparture !== before.requestedDeparture);
       this.checkDailyMiles(after.route, after.travelDays, after.dailyMiles);
@@ -218,18 +211,13 @@ export class MovesService {
       if (!Object.keys(d.after).length) return;
       after.version = before.version + 1;
       after.updatedAt = now;
-      const res = await m
-        .createQueryBuilder()
-        .update(Move)
-        .set({
-          customer: after.customer, customerRef: after.customerRef, commodity: after.commodity, tractorId: after.tractorId, trailerId: after.trailerId,
-          driverId: after.driverId, sliderSettingFt: after.sliderSettingFt, articles: after.articles, route: after.route, jurisdictions: after.jurisdictions,
-          origin: after.origin, destination: after.destination, requestedDeparture: after.requestedDeparture, travelDays: after.travelDays,
-          dailyMiles: after.dailyMiles, notes: after.notes, summary: after.summary, planRevision: after.planRevision, version: after.version, ruleVersions: after.ruleVersions,
-        })
-        .where('id = :id AND version = :v', { id, v: before.version })
-        .execute();
-      if (res.affected !== 1) throw new AppException(409, 'conflict', 'This move was changed by someone else; reload it');
+      const written = await this.repo.updatePlan(m, id, before.version, {
+        customer: after.customer, customerRef: after.customerRef, commodity: after.commodity, tractorId: after.tractorId, trailerId: after.trailerId,
+        driverId: after.driverId, sliderSettingFt: after.sliderSettingFt, articles: after.articles, route: after.route, jurisdictions: after.jurisdictions,
+        origin: after.origin, destination: after.destination, requestedDeparture: after.requestedDeparture, travelDays: after.travelDays,
+        dailyMiles: after.dailyMiles, notes: after.notes, summary: after.summary, planRevision: after.planRevision, version: after.version, ruleVersions: after.ruleVersions,
+      });
+      if (!written) throw new DomainError(DOMAIN_ERRORS.VERSION_CONFLICT, 'This move was changed by someone else; reload it');
       await this.audit.record(m, { moveId: id, entity: 'move', entityId: id, action: 'updated', actorId: actor.id, before: d.before, after: d.after });
       if (changedPlan.length) {
         for (const ext of this.extensions.all()) await ext.onPlanChanged?.({ manager: m, before, after, changed: changedPlan, actor });
@@ -239,54 +227,13 @@ export class MovesService {
   }
 
   async list(q: ListMovesQuery, viewer: SessionUser): Promise<MovesPage> {
-    // The desk's busiest call, so it is plain SQL: only the columns the list shows (the flags read out of the
-    // summary JSON and the dates formatted in SQL) and no entity hydration. The driver join is many-to-one, so
-    // LIMIT/OFFSET pages correctly. The total is a separate count, which PostgreSQL answers from the index alone
-    // (a window count would read every filtered row).
-    const where: string[] = [];
-    const params: unknown[] = [];
-    const param = (v: unknown) => (params.push(v), `$${params.length}`);
-    if (q.stage) where.push(`m.stage = ${param(q.stage)}`);
-    if (q.jurisdiction) where.push(`${param(q.jurisdiction)} = ANY(m.jurisdictions)`);
-    if (viewer.role === 'driver') where.push(`m.driver_id = ${param(viewer.id)}`);
-    if (q.search) {
-      // the same expression as the trigram index moves_search_idx
-      where.push(`(m.reference || ' ' || m.customer || ' ' || m.commodity || ' ' || m.origin || ' ' || m.destination) ILIKE ${param(`%${q.search.replace(/[%_\\]/g, '\\$&')}%`)}`);
-    }
-    const whereSql = where.length ? `WHERE ${where.join(' AND ')}` : '';
-    const order = q.sort === 'updated' ? 'm.updated_at DESC, m.id' : `m.requested_departure ${q.sort === '-departure' ? 'DESC' : 'ASC'}, m.id`;
-    const n = params.length;
-    const [rows, [{ total }]] = await Promise.all([
-      preparedQuery<MoveListRow>(
-        this.ds,
-        `SELECT m.id, m.reference, m.customer, m.commodity, m.stage, m.origin, m.destination,
-                to_char(m.requested_departure, 'YYYY-MM-DD') AS "requestedDeparture", m.jurisdictions,
-                d.id AS "driverId", d.name AS "driverName",
-                coalesce(jsonb_array_length(m.summary->'permitsNeeded'), 0) AS "permitsNeeded",
-                coalesce((m.summary->>'escorts')::int, 0) AS escorts,
-                coalesce((m.summary->>'superload')::boolean, false) AS superload,
-                coalesce(jsonb_array_length(m.summary->'problems'), 0) AS problems,
-                coalesce((m.summary->>'overweight')::boolean, false) AS overweight,
-                to_char(m.updated_at AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"') AS "updatedAt"
-           FROM moves m LEFT JOIN users d ON d.id = m.driver_id
-          ${whereSql}
-          ORDER BY ${order}
-          LIMIT $${n + 1} OFFSET $${n + 2}`,
-        [...params, q.pageSize, (q.page - 1) * q.pageSize],
-      ),
-      preparedQuery<{ total: number }>(this.ds, `SELECT count(*)::int AS total FROM moves m ${whereSql}`, params),
-    ]);
+    const { rows, total } = await this.repo.listPage({ ...q, ...(viewer.role === 'driver' ? { driverId: viewer.id } : {}) });
     return { items: rows.map(toListItem), total, page: q.page, pageSize: q.pageSize };
   }
 
   async stageCounts(viewer: SessionUser): Promise<StageCounts> {
-    const rows: { stage: MoveStage; n: number }[] = await this.ds.query(
-      `SELECT stage, count(*)::int AS n FROM moves ${viewer.role === 'driver' ? 'WHERE driver_id = $1' : ''} GROUP BY stage`,
-      viewer.role === 'driver' ? [viewer.id] : [],
-    );
-    const counts = Object.fromEntries(MOVE_STAGES.map((s) => [s, 0])) as StageCounts;
-    for (const r of rows) counts[r.stage] = r.n;
-    return counts;
+    const found = await this.repo.stageCounts(viewer.role === 'driver' ? viewer.id : undefined);
+    return Object.fromEntries(MOVE_STAGES.map((s) => [s, found[s] ?? 0])) as StageCounts;
   }
 
   async assessment(id: string, viewer: SessionUser, now: Date): Promise<AssessmentDto> {
@@ -299,9 +246,10 @@ export class MovesService {
    * the current ones, for the re-assessment preview), and with its issued permits' terms governing their states.
    */
   async assessmentOf(move: Move, now: Date, manager?: EntityManager, opts: { rules?: 'kept' | 'current' } = {}): Promise<AssessmentDto> {
-    const m = manager ?? this.ds.manager;
-    const tractor = move.tractor ?? (await m.findOneByOrFail(Tractor, { id: move.tractorId }));
-    const trailer = move.trailer ?? (await m.findOneByOrFail(Trailer, { id: move.trailerId }));
+    const m = manager ?? this.repo.manager;
+    const tractor = move.tractor ?? (await this.repo.tractor(move.tractorId, m));
+    const trailer = move.trailer ?? (await this.repo.trailer(move.trailerId, m));
+    if (!tractor || !trailer) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No equipment for move ${move.id}`);
     const permits: Record<string, PermitTerms> = {};
     for (const ext of this.extensions.all()) if (ext.permitTerms) Object.assign(permits, await ext.permitTerms(move, m));
     const pinned = opts.rules === 'current' ? null : move.ruleVersions;
@@ -322,9 +270,6 @@ export class MovesService {
     return this.audit.forMove(id);
   }
 }
-
-type MoveListRow = Pick<MoveSummaryDto, 'id' | 'reference' | 'customer' | 'commodity' | 'stage' | 'origin' | 'destination' | 'requestedDeparture' | 'jurisdictions' | 'updatedAt'>
-  & MoveSummaryDto['flags'] & { driverId: string | null; driverName: string | null };
 
 function toListItem(r: MoveListRow): MoveSummaryDto {
   return {

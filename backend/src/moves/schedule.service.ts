@@ -1,10 +1,9 @@
 import { Injectable } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import {
-  dayPlan, defaultDailyMiles, jurisdictionByCode, scheduleCheck,
+  dayPlan, defaultDailyMiles, jurisdictionByCode, scheduleCheck, travelDates,
   type AssessmentDto, type DayPlan, type ScheduleDto, type ScheduleInput,
 } from '@amberline/common';
-import { travelDates } from './assessment.service';
 import type { Move } from './entities/move.entity';
 import { MoveExtensionsRegistry } from './move-extensions';
 

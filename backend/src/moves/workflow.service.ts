@@ -1,16 +1,15 @@
 import { Injectable } from '@nestjs/common';
-import { DataSource, EntityManager } from 'typeorm';
 import {
-  assessmentDifferences, canTransition, formatZoned, MOVE_STAGE_LABELS, REOPEN_DELIVERED_DAYS, zonedTimeToUtc,
+  assessmentDifferences, canTransition, DOMAIN_ERRORS, DomainError, formatZoned, MOVE_STAGE_LABELS, REOPEN_DELIVERED_DAYS, zonedTimeToUtc,
   type MoveDto, type MoveStage, type ReassessmentPreview, type ScheduleDto, type SessionUser, type UnmetCondition,
 } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
-import { AppException, fieldError } from '../core/app-exception';
+import { fieldError } from '../core/app-exception';
 import { ReassessDto, ReopenDto, StageChangeDto } from './dto/move.dto';
 import { summarize } from './assessment.service';
 import { ScheduleService } from './schedule.service';
-import { Move } from './entities/move.entity';
 import { MoveExtensionsRegistry, type TransitionContext } from './move-extensions';
+import { MovesRepository } from './moves.repository';
 import { MovesService, toMoveDto } from './moves.service';
 
 /**
@@ -44,7 +43,7 @@ const zonedMidnight = (date: string, tz: string): number => zonedTimeToUtc(Date.
 @Injectable()
 export class WorkflowService {
   constructor(
-    private readonly ds: DataSource,
+    private readonly repo: MovesRepository,
     private readonly moves: MovesService,
     private readonly audit: AuditService,
     private readonly extensions: MoveExtensionsRegistry,
@@ -53,17 +52,12 @@ export class WorkflowService {
 
   async transition(id: string, dto: StageChangeDto, actor: SessionUser, now: Date): Promise<MoveDto> {
     if (dto.to === 'cancelled' && !dto.reason?.trim()) throw fieldError('reason', 'say why the move is cancelled');
-    await this.ds.transaction(async (manager) => {
+    await this.repo.transaction(async (manager) => {
       // the row lock makes two simultaneous transitions run one after the other: the second sees the first's result
-      const locked = await manager.findOne(Move, { where: { id }, lock: { mode: 'pessimistic_write' } });
-      if (!locked) throw new AppException(404, 'not_found', `No move ${id}`);
-      const move = await this.moves.get(id, undefined, manager);
-      if (dto.version !== undefined && dto.version !== move.version) {
-        throw new AppException(409, 'conflict', `This move was changed by someone else (version ${move.version}, yours ${dto.version}); reload it`);
-      }
+      const move = await this.moves.lockForUpdate(manager, id, dto.version);
       if (!canTransition(move.stage, dto.to)) {
         const unmet = [{ code: 'not_a_step', message: `a move cannot go from ${MOVE_STAGE_LABELS[move.stage]} to ${MOVE_STAGE_LABELS[dto.to]}` }];
-        throw new AppException(409, 'conflict', unmet[0].message, { unmet });
+        throw new DomainError(DOMAIN_ERRORS.TRANSITION_REFUSED, unmet[0].message, { unmet });
       }
       const assessment = await this.moves.assessmentOf(move, now, manager);
       const ctx: TransitionContext = { manager, move, to: dto.to, assessment, actor };
@@ -80,12 +74,12 @@ export class WorkflowService {
         }
       }
       if (unmet.length) {
-        throw new AppException(409, 'conflict', `Cannot move to ${MOVE_STAGE_LABELS[dto.to]}: ${unmet.map((u) => u.message).join('; ')}`, { unmet });
+        throw new DomainError(DOMAIN_ERRORS.TRANSITION_REFUSED, `Cannot move to ${MOVE_STAGE_LABELS[dto.to]}: ${unmet.map((u) => u.message).join('; ')}`, { unmet });
       }
       for (const ext of this.extensions.all()) if (ext.transitionNotes) notes.push(...(await ext.transitionNotes(ctx)));
       // leaving requested, the assessment keeps the rule versions it used: later rule edits change it only when re-assessed
       const pin = move.ruleVersions === null ? { ruleVersions: assessment.ruleVersions } : {};
-      await manager.update(Move, { id }, { stage: dto.to, version: move.version + 1, updatedAt: now, stageChangedAt: now, ...pin });
+      await this.repo.updateState(manager, id, { stage: dto.to, version: move.version + 1, updatedAt: now, stageChangedAt: now, ...pin });
       for (const ext of this.extensions.all()) if (ext.afterTransition) await ext.afterTransition({ ...ctx, from: move.stage });
       await this.audit.record(manager, {
         moveId: id, entity: 'move', entityId: id, action: 'stage', actorId: actor.id,
@@ -96,14 +90,6 @@ export class WorkflowService {
     return toMoveDto(await this.moves.get(id));
   }
 
-  /** Locks the move, checks the caller's version, and loads it with its equipment. */
-  private async lockedMove(manager: EntityManager, id: string, version: number): Promise<Move> {
-    const locked = await manager.findOne(Move, { where: { id }, lock: { mode: 'pessimistic_write' } });
-    if (!locked) throw new AppException(404, 'not_found', `No move ${id}`);
-    if (version !== locked.version) throw new AppException(409, 'conflict', `This move was changed by someone else (version ${locked.version}, yours ${version}); reload it`);
-    return this.moves.get(id, undefined, manager);
-  }
-
   /**
    * Reopens a cancelled move (back to requested, assessed again with the current rules) or one delivered within
    * REOPEN_DELIVERED_DAYS (back to running). Always with a reason, in the audit trail.
@@ -111,20 +97,20 @@ export class WorkflowService {
   async reopen(id: string, dto: ReopenDto, actor: SessionUser, now: Date): Promise<MoveDto> {
     const reason = dto.reason?.trim();
     if (!reason) throw fieldError('reason', 'say why the move is reopened');
-    await this.ds.transaction(async (manager) => {
-      const move = await this.lockedMove(manager, id, dto.version);
+    await this.repo.transaction(async (manager) => {
+      const move = await this.moves.lockForUpdate(manager, id, dto.version);
       let to: MoveStage;
       if (move.stage === 'cancelled') to = 'requested';
       else if (move.stage === 'delivered') {
         const since = move.stageChangedAt ?? move.updatedAt;
         const days = (now.getTime() - since.getTime()) / 86_400_000;
         if (days > REOPEN_DELIVERED_DAYS) {
-          throw new AppException(409, 'conflict', `A move delivered more than ${REOPEN_DELIVERED_DAYS} days ago cannot be reopened (delivered ${since.toISOString().slice(0, 10)})`);
+          throw new DomainError(DOMAIN_ERRORS.TOO_LATE, `A move delivered more than ${REOPEN_DELIVERED_DAYS} days ago cannot be reopened (delivered ${since.toISOString().slice(0, 10)})`);
         }
         to = 'running';
-      } else throw new AppException(409, 'conflict', `Only cancelled moves, or moves delivered within ${REOPEN_DELIVERED_DAYS} days, can be reopened; this one is ${MOVE_STAGE_LABELS[move.stage].toLowerCase()}`);
+      } else throw new DomainError(DOMAIN_ERRORS.TRANSITION_REFUSED, `Only cancelled moves, or moves delivered within ${REOPEN_DELIVERED_DAYS} days, can be reopened; this one is ${MOVE_STAGE_LABELS[move.stage].toLowerCase()}`);
       const back = to === 'requested' ? { ruleVersions: null } : {};
-      await manager.update(Move, { id }, { stage: to, version: move.version + 1, updatedAt: now, stageChangedAt: now, ...back });
+      await this.repo.updateState(manager, id, { stage: to, version: move.version + 1, updatedAt: now, stageChangedAt: now, ...back });
       await this.audit.record(manager, {
         moveId: id, entity: 'move', entityId: id, action: 'reopened', actorId: actor.id, before: { stage: move.stage }, after: { stage: to }, reason,
       });
@@ -135,7 +121,7 @@ export class WorkflowService {
   /** The move's schedule check, as the move page shows it. */
   async scheduleOf(id: string, viewer: SessionUser, now: Date): Promise<ScheduleDto> {
     const move = await this.moves.get(id, viewer);
-    return this.schedule.forMove(move, await this.moves.assessmentOf(move, now), this.ds.manager);
+    return this.schedule.forMove(move, await this.moves.assessmentOf(move, now), this.repo.manager);
   }
 
   /** What re-assessing with the current rules would change (nothing is written). */
@@ -158,19 +144,21 @@ export class WorkflowService {
    * versions before and after and the differences; permits and the run sheet follow as after a plan change.
    */
   async reassess(id: string, dto: ReassessDto, actor: SessionUser, now: Date): Promise<MoveDto> {
-    await this.ds.transaction(async (manager) => {
-      const move = await this.lockedMove(manager, id, dto.version);
-      if (move.stage === 'delivered' || move.stage === 'cancelled') throw new AppException(409, 'conflict', `A ${MOVE_STAGE_LABELS[move.stage].toLowerCase()} move keeps its assessment; it is never re-assessed`);
-      if (!move.ruleVersions) throw new AppException(409, 'conflict', 'A requested move is always assessed with the current rules; nothing to re-assess');
+    await this.repo.transaction(async (manager) => {
+      const move = await this.moves.lockForUpdate(manager, id, dto.version);
+      if (move.stage === 'delivered' || move.stage === 'cancelled') throw new DomainError(DOMAIN_ERRORS.RECORD_CLOSED, `A ${MOVE_STAGE_LABELS[move.stage].toLowerCase()} move keeps its assessment; it is never re-assessed`);
+      if (!move.ruleVersions) throw new DomainError(DOMAIN_ERRORS.PRECONDITION_UNMET, 'A requested move is always assessed with the current rules; nothing to re-assess');
       const kept = await this.moves.assessmentOf(move, now, manager);
       const current = await this.moves.assessmentOf(move, now, manager, { rules: 'current' });
       const differences = assessmentDifferences(kept.result, current.result);
-      await manager.update(Move, { id }, { ruleVersions: current.ruleVersions, summary: summarize(current.result), version: move.version + 1, updatedAt: now });
+      const written = { ruleVersions: current.ruleVersions, summary: summarize(current.result), version: move.version + 1, updatedAt: now };
+      await this.repo.updateState(manager, id, written);
       await this.audit.record(manager, {
         moveId: id, entity: 'move', entityId: id, action: 'reassessed', actorId: actor.id,
         before: { ruleVersions: kept.ruleVersions }, after: { ruleVersions: current.ruleVersions, differences }, reason: dto.reason?.trim() || null,
       });
-      const after = await this.moves.get(id, undefined, manager);
+      // the move as just written (its equipment and driver did not change): no need to read it again
+      const after = Object.assign(this.repo.copy(move), { tractor: move.tractor, trailer: move.trailer, driver: move.driver }, written);
       for (const ext of this.extensions.all()) await ext.onPlanChanged?.({ manager, before: move, after, changed: ['rule versions'], actor });
     });
     return toMoveDto(await this.moves.get(id));
