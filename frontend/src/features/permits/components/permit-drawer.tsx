@@ -1,26 +1,24 @@
-import { useEffect, useMemo, useState } from 'react';
+import { useEffect, useState } from 'react';
 import {
-  Alert, App, Button, Col, Descriptions, Divider, Drawer, Form, Input, InputNumber, Modal, Progress, Radio, Row, Select, Space, Spin, Switch, Table, Timeline, Typography, Upload,
+  Alert, App, Button, Col, Descriptions, Divider, Drawer, Form, Input, InputNumber, Modal, Row, Select, Space, Spin, Switch, Timeline, Typography,
 } from 'antd';
 import { Link } from 'react-router-dom';
 import {
-  formatFeetInches, formatPounds, PERMIT_STATUS_LABELS, PERMIT_TRANSITIONS, PERMIT_TYPE_LABELS, PERMIT_TYPES, TEST_PAYMENT_METHODS,
-  type PaymentDto, type PermitDto, type PermitStatus, type PermitType, type UpdatePermitRequest,
+  formatFeetInches, formatPounds, PERMIT_STATUS_LABELS, PERMIT_TRANSITIONS, PERMIT_TYPE_LABELS, PERMIT_TYPES,
+  type PermitDto, type PermitStatus, type PermitType, type UpdatePermitRequest,
 } from '@amberline/common';
 import { Caution } from '../../../components/caution';
 import { to } from '../../../config/paths';
 import { ApiError } from '../../../lib/api-client';
 import { accessFor } from '../../../lib/access';
 import { useAuth } from '../../../lib/auth';
-import { downloadPermitDocument } from '../api/download-file';
 import { useAssignees } from '../api/get-assignees';
 import { usePermit } from '../api/get-permit';
-import { newAttemptKey, usePayPermit } from '../api/pay-permit';
-import { useRefundPermit } from '../api/refund-permit';
 import { useUpdatePermit } from '../api/update-permit';
-import { useUploadPermitDocument } from '../api/upload-permit-document';
-import { localText, PaymentTag, PermitStatusTag, usd } from './permit-tags';
+import { PermitStatusTag, usd } from './permit-tags';
 import { NotOnFile } from '../../../components/rule-source';
+import { PermitDocuments } from './permit-documents';
+import { PermitPayment } from './permit-payment';
 import { fieldsToTravel, PermitTravelFields, travelToFields, type TravelFieldValues } from './permit-travel-fields';
 
 type FormValues = TravelFieldValues & {
@@ -306,137 +304,6 @@ function PermitDetails({ p, canWork }: { p: PermitDto; canWork: boolean }) {
       >
         <Input.TextArea rows={3} value={reason} onChange={(e) => setReason(e.target.value)} maxLength={500} aria-label="Reason" />
       </Modal>
-    </div>
-  );
-}
-
-function PermitDocuments({ p, canWork }: { p: PermitDto; canWork: boolean }) {
-  const { message } = App.useApp();
-  const upload = useUploadPermitDocument();
-  const [progress, setProgress] = useState<number | null>(null);
-  const [error, setError] = useState<string | null>(null);
-  return (
-    <div data-testid="permit-documents">
-      {canWork && (
-        <Upload
-          accept="application/pdf,.pdf"
-          showUploadList={false}
-          customRequest={({ file }) => {
-            setError(null);
-            setProgress(0);
-            upload.mutate(
-              { permitId: p.id, file: file as File, onProgress: setProgress },
-              {
-                onSuccess: (d) => {
-                  setProgress(null);
-                  message.success(`${d.fileName} attached as version ${d.version}`);
-                },
-                onError: (e) => {
-                  setProgress(null);
-                  setError(e.message);
-                },
-              },
-            );
-          }}
-        >
-          <Button loading={upload.isPending} data-testid="permit-upload">Attach permit PDF</Button>
-        </Upload>
-      )}
-      {progress !== null && <Progress percent={progress} size="small" data-testid="upload-progress" />}
-      {error && <Alert type="error" showIcon title={error} style={{ marginTop: 8 }} data-testid="upload-error" />}
-      <Table
-        size="small"
-        rowKey="id"
-        style={{ marginTop: 8 }}
-        pagination={false}
-        dataSource={p.documents}
-        locale={{ emptyText: 'No PDF yet' }}
-        columns={[
-          { title: 'Version', dataIndex: 'version', width: 70 },
-          { title: 'File', dataIndex: 'fileName', render: (name: string, d) => <Button type="link" size="small" onClick={() => downloadPermitDocument(p.id, d.id, name).catch((e: Error) => message.error(e.message))}>{name}</Button> },
-          { title: 'Size', dataIndex: 'sizeBytes', render: (b: number) => `${(b / 1024).toFixed(1)} KB` },
-          { title: 'Uploaded', dataIndex: 'uploadedAt', render: (v: string, d) => `${new Date(v).toLocaleString()}${d.uploadedBy ? ` · ${d.uploadedBy.name}` : ''}` },
-        ]}
-      />
-    </div>
-  );
-}
-
-function PermitPayment({ p, canWork }: { p: PermitDto; canWork: boolean }) {
-  const { message } = App.useApp();
-  const pay = usePayPermit();
-  const refund = useRefundPermit();
-  const [method, setMethod] = useState(TEST_PAYMENT_METHODS[0].id);
-  const [attemptKey, setAttemptKey] = useState(newAttemptKey);
-  const [last, setLast] = useState<PaymentDto | null>(null);
-  const paid = p.payments.find((x) => x.status === 'succeeded');
-  const inFlight = p.payments.find((x) => x.status === 'processing' || x.status === 'pending');
-  const latest = useMemo(() => last ?? p.payments[0] ?? null, [last, p.payments]);
-  const canPay = canWork && p.status === 'issued' && !paid && !inFlight;
-
-  const submit = () =>
-    pay.mutate(
-      { permitId: p.id, paymentMethod: method, idempotencyKey: attemptKey },
-      {
-        onSuccess: (r) => {
-          setLast(r);
-          setAttemptKey(newAttemptKey()); // the next attempt is a new one
-          if (r.status === 'declined' || r.status === 'failed') message.error(`Payment declined: ${r.failureMessage ?? r.declineCode}`);
-          else message.success(`Payment of ${usd(r.amountUsd)} accepted; waiting for the processor's confirmation`);
-        },
-        onError: (e) => message.error(e.message),
-      },
-    );
-
-  return (
-    <div data-testid="permit-payment">
-      <Space wrap style={{ marginBottom: 8 }}>
-        <span>Actual fee: <strong>{usd(p.actualFeeUsd)}</strong></span>
-        <PaymentTag status={p.paymentStatus} />
-      </Space>
-      {latest && (latest.status === 'declined' || latest.status === 'failed') && !paid && (
-        <Alert type="error" showIcon title="The card was declined" description={latest.failureMessage ?? latest.declineCode} style={{ marginBottom: 8 }} data-testid="payment-declined" />
-      )}
-      {p.status !== 'issued' && !paid && <Typography.Paragraph type="secondary">The fee is paid once the permit is issued.</Typography.Paragraph>}
-      {canPay && (
-        <div style={{ marginBottom: 8 }}>
-          <Typography.Paragraph type="secondary" style={{ marginBottom: 4 }}>Test mode: choose a test card (no real card is charged).</Typography.Paragraph>
-          <Radio.Group value={method} onChange={(e) => setMethod(e.target.value)} options={TEST_PAYMENT_METHODS.map((m) => ({ value: m.id, label: m.label }))} data-testid="test-card" />
-          <div style={{ marginTop: 8 }}>
-            <Button type="primary" onClick={submit} loading={pay.isPending} disabled={!p.actualFeeUsd} data-testid="permit-pay">
-              Pay {usd(p.actualFeeUsd)}
-            </Button>
-            {!p.actualFeeUsd && <Typography.Text type="secondary" style={{ marginLeft: 8 }}>Record the actual fee first.</Typography.Text>}
-          </div>
-        </div>
-      )}
-      {canWork && p.status === 'void' && paid && p.refundable && (
-        <Button
-          onClick={() => refund.mutate({ permitId: p.id, reason: 'permit voided' }, { onSuccess: () => message.success('Fee refunded'), onError: (e) => message.error(e.message) })}
-          loading={refund.isPending}
-          data-testid="permit-refund"
-        >
-          Refund {usd(paid.amountUsd)}
-        </Button>
-      )}
-      <Table
-        size="small"
-        rowKey="id"
-        pagination={false}
-        dataSource={p.payments}
-        locale={{ emptyText: 'No payment yet' }}
-        columns={[
-          { title: 'Attempt', dataIndex: 'attempt', width: 70 },
-          { title: 'Amount', dataIndex: 'amountUsd', render: (v: number) => usd(v) },
-          { title: 'Status', dataIndex: 'status', render: (s: PaymentDto['status']) => <PaymentTag status={s} /> },
-          { title: 'Card', dataIndex: 'paymentMethod' },
-          { title: 'When', dataIndex: 'createdAt', render: (v: string) => new Date(v).toLocaleString() },
-          { title: 'Processor id', dataIndex: 'stripePaymentIntentId', render: (v: string | null) => <Typography.Text code>{v ?? '—'}</Typography.Text> },
-        ]}
-      />
-      <Typography.Paragraph type="secondary" style={{ marginTop: 8 }}>
-        Validity: {localText(p.validFromLocal)} to {localText(p.validToLocal)} ({p.timeZone})
-      </Typography.Paragraph>
     </div>
   );
 }

@@ -56,7 +56,8 @@ export function MoveForm({ move, tractors, trailers }: Props) {
     }
   }, [move, form]);
 
-  const values = (Form.useWatch([], form) ?? {}) as MoveDraft;
+  const watched = Form.useWatch([], form) as MoveDraft | undefined;
+  const values = useMemo(() => watched ?? ({} as MoveDraft), [watched]);
   const tractor = tractors.data?.find((t) => t.id === values.tractorId);
   const trailer = trailers.data?.find((t) => t.id === values.trailerId);
 
