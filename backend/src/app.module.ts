@@ -1,5 +1,5 @@
 import { existsSync } from 'node:fs';
-import { join, resolve } from 'node:path';
+import { join } from 'node:path';
 import { DynamicModule, Module } from '@nestjs/common';
 import { ConfigModule, ConfigService } from '@nestjs/config';
 import { APP_FILTER, APP_PIPE } from '@nestjs/core';
@@ -7,6 +7,7 @@ import { ScheduleModule } from '@nestjs/schedule';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { AuthModule } from './auth/auth.module';
+import { AppConfigModule, environment, readAppConfig } from './config/app-config';
 import { validateEnv } from './config/env.validation';
 import { ApiExceptionFilter } from './core/filters/api-exception.filter';
 import { createValidationPipe } from './core/validation.pipe';
@@ -24,14 +25,16 @@ import { VendorsModule } from './vendors/vendors.module';
 import { EscortsModule } from './escorts/escorts.module';
 
 function frontendModules(): DynamicModule[] {
-  const dist = resolve(process.env.FRONTEND_DIST ?? join(__dirname, '..', '..', 'frontend', 'dist'));
+  const dist = readAppConfig().frontendDist;
   if (!existsSync(join(dist, 'index.html'))) return [];
   return [ServeStaticModule.forRoot({ rootPath: dist, exclude: ['/api/{*path}'] })];
 }
 
 @Module({
   imports: [
-    ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, validate: validateEnv }),
+    AppConfigModule,
+    // the checked settings for the modules that read them by name (from the environment app-config reads)
+    ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, validate: () => validateEnv(environment()) }),
     TypeOrmModule.forRootAsync({
       inject: [ConfigService],
       useFactory: (config: ConfigService) => ({

@@ -1,15 +1,10 @@
 import type { INestApplication } from '@nestjs/common';
 import helmet from 'helmet';
+import { readAppConfig, trustProxySetting } from './config/app-config';
 import { bodyParsers } from './core/body-parsers';
 import { answerMiddlewareError } from './core/filters/api-exception.filter';
 
-/** TRUST_PROXY as Express reads it: a hop count, or addresses / subnets / names; false when unset. */
-export function trustProxySetting(raw: string | undefined): boolean | number | string {
-  const v = raw?.trim();
-  if (!v || v === 'false') return false;
-  if (/^\d+$/.test(v)) return Number(v);
-  return v;
-}
+export { trustProxySetting };
 
 /** Settings shared by the server and the tests' app. */
 export function configureApp(app: INestApplication): void {
@@ -35,6 +30,6 @@ export function configureApp(app: INestApplication): void {
   app.use(answerMiddlewareError);
   // the client address (sign-in limits) comes from X-Forwarded-For only when a proxy is configured: TRUST_PROXY
   // names it (e.g. "loopback", "10.0.0.0/8" or a hop count); without it the header is ignored
-  app.getHttpAdapter().getInstance().set('trust proxy', trustProxySetting(process.env.TRUST_PROXY));
+  app.getHttpAdapter().getInstance().set('trust proxy', readAppConfig().trustProxy);
   app.enableShutdownHooks();
 }

@@ -5,13 +5,14 @@ import { NestExpressApplication } from '@nestjs/platform-express';
 import { SwaggerModule } from '@nestjs/swagger';
 import { AppModule } from './app.module';
 import { configureApp } from './configure-app';
+import { environment } from './config/app-config';
 import { validateEnv } from './config/env.validation';
 import { buildOpenApiDocument } from './openapi';
 
 async function bootstrap(): Promise<void> {
   let env;
   try {
-    env = validateEnv(process.env);
+    env = validateEnv(environment());
   } catch (err) {
     console.error((err as Error).message);
     process.exit(1);

@@ -1,5 +1,6 @@
 import { plainToInstance, Type } from 'class-transformer';
 import { IsIn, IsInt, IsOptional, IsString, Matches, Max, Min, MinLength, validateSync } from 'class-validator';
+import { DEFAULTS, LOCAL_STRIPE_KEY, LOCAL_WEBHOOK_SECRET } from './app-config';
 
 /** Environment the server needs. A missing or bad value stops start-up with a message naming it. */
 export class EnvironmentVariables {
@@ -12,18 +13,18 @@ export class EnvironmentVariables {
 
   @IsOptional()
   @Matches(/^\d+[smhd]$/, { message: 'JWT_EXPIRES_IN must look like 30m, 12h or 7d' })
-  JWT_EXPIRES_IN = '12h';
+  JWT_EXPIRES_IN: string = DEFAULTS.JWT_EXPIRES_IN;
 
   @IsOptional()
   @Type(() => Number)
   @IsInt()
   @Min(1)
   @Max(65535)
-  PORT = 3000;
+  PORT: number = DEFAULTS.PORT;
 
   @IsOptional()
   @IsString()
-  HOST = '127.0.0.1';
+  HOST: string = DEFAULTS.HOST;
 
   @IsOptional()
   @IsString()
@@ -31,10 +32,9 @@ export class EnvironmentVariables {
 
   @IsOptional()
   @IsIn(['development', 'production', 'test'])
-  NODE_ENV = 'development';
+  NODE_ENV: string = DEFAULTS.NODE_ENV;
 
-  // Payments (permits module). Read when the Stripe client is made; without them the local fake's defaults apply:
-  // key sk_test_amberline_local, 127.0.0.1:12111 over http, webhook secret whsec_amberline_local.
+  // Payments (permits module). Without them the local stand-in's settings apply (see stripeSettings in app-config).
   @IsOptional()
   @Matches(/^sk_(test|live)_[A-Za-z0-9_]+$/, { message: 'STRIPE_SECRET_KEY must look like sk_test_…' })
   STRIPE_SECRET_KEY?: string;
@@ -68,25 +68,25 @@ export class EnvironmentVariables {
   // Mail (escorts module): nodemailer over SMTP to the local catcher `npm start` runs (maildev on 1025).
   @IsOptional()
   @IsString()
-  SMTP_HOST = '127.0.0.1';
+  SMTP_HOST: string = DEFAULTS.SMTP_HOST;
 
   @IsOptional()
   @Matches(/^\d{1,5}$/, { message: 'SMTP_PORT must be a port number' })
-  SMTP_PORT = '1025';
+  SMTP_PORT: string = DEFAULTS.SMTP_PORT;
 
   @IsOptional()
   @Matches(/^(.+<[^@\s]+@[^@\s]+>|[^@\s<>]+@[^@\s<>]+)$/, { message: 'MAIL_FROM must be an address, or "Name <address>"' })
-  MAIL_FROM = 'Amberline dispatch <dispatch@amberline.example>';
+  MAIL_FROM: string = DEFAULTS.MAIL_FROM;
 
   /** Base of links in e-mails (the vendor's answer page). */
   @IsOptional()
   @Matches(/^https?:\/\/[^\s/]+(\/[^\s]*)?$/, { message: 'APP_URL must be an http(s) URL' })
-  APP_URL = 'http://127.0.0.1:3000';
+  APP_URL: string = DEFAULTS.APP_URL;
 
   /** Outbox channel this instance sends; instances on one database share `default`. */
   @IsOptional()
   @Matches(/^[a-z0-9._-]{1,80}$/, { message: 'MAIL_CHANNEL must be 1–80 of a-z, 0-9, . _ -' })
-  MAIL_CHANNEL = 'default';
+  MAIL_CHANNEL: string = DEFAULTS.MAIL_CHANNEL;
 
   /** How often the outbox worker runs, in ms; 0 turns the schedule off. Unset: 5 s, or off when NODE_ENV=test. */
   @IsOptional()
@@ -102,8 +102,8 @@ export class EnvironmentVariables {
 /** Secrets written in the repository (test scripts, the local fake): never accepted in production. */
 const REPOSITORY_SECRETS: Record<string, string[]> = {
   JWT_SECRET: ['test-secret-not-for-production'],
-  STRIPE_SECRET_KEY: ['sk_test_amberline_local'],
-  STRIPE_WEBHOOK_SECRET: ['whsec_amberline_local'],
+  STRIPE_SECRET_KEY: [LOCAL_STRIPE_KEY],
+  STRIPE_WEBHOOK_SECRET: [LOCAL_WEBHOOK_SECRET],
 };
 
 /** In production every secret must be set, and none may be a value written in the repository. */

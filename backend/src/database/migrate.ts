@@ -1,5 +1,6 @@
 import 'reflect-metadata';
 import { DataSource } from 'typeorm';
+import { environment } from '../config/app-config';
 import { typeormOptions } from './typeorm-options';
 
 /** Runs every pending migration in one transaction. Used by `npm start` and by the test setup. */
@@ -15,7 +16,8 @@ export async function runMigrations(url: string): Promise<string[]> {
 }
 
 if (require.main === module) {
-  const url = process.env.DATABASE_URL;
+  // no default here: migrating must name its database
+  const url = environment().DATABASE_URL;
   if (!url) {
     console.error('DATABASE_URL is not set');
     process.exit(2);
