@@ -2,14 +2,13 @@ import { createHash } from 'node:crypto';
 import { Inject, Injectable, Logger } from '@nestjs/common';
 import type { Readable } from 'node:stream';
 import { PDFDocument } from 'pdf-lib';
-import { DataSource } from 'typeorm';
-import type { PermitDocumentDto, SessionUser } from '@amberline/common';
+import { DOMAIN_ERRORS, DomainError, type PermitDocumentDto, type SessionUser } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
-import { AppException, fieldError } from '../core/app-exception';
-import { PermitDocument } from './entities/permit-document.entity';
-import { Permit } from './entities/permit.entity';
+import { fieldError } from '../core/app-exception';
+import { DocumentsRepository } from './documents.repository';
 import { toDocumentDto } from './permit-mappers';
-import { sanitizeFileName } from './permit-rules';
+import { storedFileName } from './permit-input';
+import { PermitsRepository } from './permits.repository';
 import { PermitsService } from './permits.service';
 import { FILE_STORE, type FileStore } from './storage/file-store';
 
@@ -42,7 +41,8 @@ export async function checkPdf(buf: Buffer): Promise<{ pages: number }> {
 export class DocumentsService {
   private readonly logger = new Logger('PermitDocuments');
   constructor(
-    private readonly ds: DataSource,
+    private readonly repo: DocumentsRepository,
+    private readonly permitRows: PermitsRepository,
     private readonly audit: AuditService,
     private readonly permits: PermitsService,
     @Inject(FILE_STORE) private readonly store: FileStore,
@@ -55,35 +55,33 @@ export class DocumentsService {
    */
   async upload(permitId: string, file: UploadedPdf | undefined, actor: SessionUser): Promise<PermitDocumentDto> {
     if (!file) throw fieldError('file', 'attach the permit PDF in the multipart field "file"');
-    const fileName = sanitizeFileName(file.originalname);
+    const fileName = storedFileName(file.originalname);
     await checkPdf(file.buffer);
     let stored: { key: string; sha256: string; created: boolean } | null = null;
     try {
-      const id = await this.ds.transaction(async (m) => {
-        const permit = await m.findOne(Permit, { where: { id: permitId }, lock: { mode: 'pessimistic_write' } });
-        if (!permit) throw new AppException(404, 'not_found', `No permit ${permitId}`);
-        if (permit.status === 'void') throw new AppException(409, 'conflict', 'A void permit takes no documents');
+      const id = await this.repo.transaction(async (m) => {
+        const permit = await this.permitRows.lock(m, permitId);
+        if (!permit) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No permit ${permitId}`);
+        if (permit.status === 'void') throw new DomainError(DOMAIN_ERRORS.RECORD_CLOSED, 'A void permit takes no documents');
         const sha = createHash('sha256').update(file.buffer).digest('hex');
-        const same = await m.findOneBy(PermitDocument, { permitId, sha256: sha });
-        if (same) throw new AppException(409, 'conflict', `This PDF is already attached to the permit as version ${same.version} (${same.fileName})`, { documentId: same.id, version: same.version });
-        const [{ v }] = await m.query(`SELECT COALESCE(max(version), 0)::int + 1 AS v FROM permit_documents WHERE permit_id = $1`, [permitId]);
+        const same = await this.repo.findSame(m, permitId, sha);
+        if (same) throw new DomainError(DOMAIN_ERRORS.ALREADY_DONE, `This PDF is already attached to the permit as version ${same.version} (${same.fileName})`, { documentId: same.id, version: same.version });
+        const v = await this.repo.nextVersion(m, permitId);
         stored = await this.store.put(file.buffer);
-        const inserted = await m.insert(PermitDocument, {
+        const inserted = await this.repo.insert(m, {
           permitId, version: v, fileName, sha256: stored.sha256, sizeBytes: file.buffer.length, contentType: 'application/pdf', storageKey: stored.key, uploadedById: actor.id,
         });
         await this.audit.record(m, {
           moveId: permit.moveId, entity: 'permit', entityId: permitId, action: 'document_added', actorId: actor.id,
           after: { jurisdiction: permit.jurisdiction, version: v, fileName, sha256: stored.sha256, sizeBytes: file.buffer.length },
         });
-        return inserted.identifiers[0].id as string;
+        return inserted;
       });
-      const doc = await this.ds.manager.findOneOrFail(PermitDocument, { where: { id }, relations: { uploadedBy: true } });
-      return toDocumentDto(doc);
+      return toDocumentDto(await this.repo.withUploader(id));
     } catch (e) {
       const s = stored as { key: string; created: boolean } | null;
       if (s?.created) {
-        const [{ n }] = await this.ds.query(`SELECT count(*)::int AS n FROM permit_documents WHERE storage_key = $1`, [s.key]);
-        if (n === 0) await this.store.remove(s.key).catch((err) => this.logger.warn(`could not remove ${s.key}: ${(err as Error).message}`));
+        if ((await this.repo.countByStorageKey(s.key)) === 0) await this.store.remove(s.key).catch((err) => this.logger.warn(`could not remove ${s.key}: ${(err as Error).message}`));
       }
       throw e;
     }
@@ -92,8 +90,8 @@ export class DocumentsService {
   /** The file of one version, for clerks, dispatchers, admins and the move's assigned driver. */
   async open(permitId: string, docId: string, viewer: SessionUser): Promise<{ stream: Readable; size: number; fileName: string; contentType: string }> {
     await this.permits.load(permitId, viewer);
-    const doc = await this.ds.manager.findOneBy(PermitDocument, { id: docId, permitId });
-    if (!doc) throw new AppException(404, 'not_found', `No document ${docId} on permit ${permitId}`);
+    const doc = await this.repo.find(permitId, docId);
+    if (!doc) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No document ${docId} on permit ${permitId}`);
     const { stream, size } = await this.store.open(doc.storageKey);
     return { stream, size, fileName: doc.fileName, contentType: doc.contentType };
   }

@@ -1,12 +1,11 @@
 import { Injectable, Logger } from '@nestjs/common';
 import { Cron } from '@nestjs/schedule';
-import { DataSource, type EntityManager } from 'typeorm';
-import { formatZoned, type ExpiryScanResult } from '@amberline/common';
+import type { EntityManager } from 'typeorm';
+import { formatZoned, instantToLocal, travelSpan, zoneOf, type ExpiryScanResult } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
 import { MailService } from '../mail/mail.service';
 import { travelDates } from '../moves/assessment.service';
-import { instantToLocal, travelSpan, zoneOf } from './permit-rules';
-import { ACTIVE_MOVE_STAGES } from './permits.service';
+import { PermitsRepository } from './permits.repository';
 
 /** Hours before expiry at which an issued permit is flagged whatever the plan. */
 export const EXPIRY_WARNING_HOURS = 48;
@@ -24,7 +23,7 @@ export class ExpiryScanService {
   private readonly logger = new Logger('PermitExpiryScan');
   private readonly listeners: ExpiryWarningListener[] = [];
   constructor(
-    private readonly ds: DataSource,
+    private readonly repo: PermitsRepository,
     private readonly audit: AuditService,
     private readonly mail: MailService,
   ) {}
@@ -38,14 +37,7 @@ export class ExpiryScanService {
    * written to the outbox in the scan's own transaction. */
   private async mailWarnings(m: EntityManager, flagged: ExpiryScanResult['flagged'], now: Date): Promise<void> {
     for (const f of flagged) {
-      const [row] = await m.query(
-        `SELECT p.jurisdiction, p.permit_number, mv.reference, mv.id AS move_id,
-                coalesce((SELECT array_agg(u.email) FROM users u WHERE u.id = p.assignee_id AND u.active),
-                         (SELECT array_agg(u.email) FROM users u WHERE u.role = 'permit_clerk' AND u.active), '{}') AS clerks,
-                (SELECT u.email FROM users u WHERE u.id = mv.created_by AND u.active) AS dispatcher
-           FROM permits p JOIN moves mv ON mv.id = p.move_id WHERE p.id = $1`,
-        [f.permitId],
-      );
+      const row = await this.repo.warningRecipients(m, f.permitId);
       const to = [...new Set([...(row.clerks ?? []), ...(row.dispatcher ? [row.dispatcher] : [])])];
       if (!to.length) continue;
       await this.mail.enqueue(m, {
@@ -65,15 +57,9 @@ export class ExpiryScanService {
   }
 
   async scan(now: Date): Promise<ExpiryScanResult> {
-    const result = await this.ds.transaction(async (m) => {
-      const [{ locked }] = await m.query(`SELECT pg_try_advisory_xact_lock(hashtext('amberline.permits.expiry-scan')) AS locked`);
-      if (!locked) return { ran: false, checked: 0, flagged: [] } as ExpiryScanResult;
-      const rows: { id: string; move_id: string; jurisdiction: string; valid_to: Date; expiry_warning: string | null; departure: string; travel_days: number }[] = await m.query(
-        `SELECT p.id, p.move_id, p.jurisdiction, p.valid_to, p.expiry_warning, to_char(m.requested_departure, 'YYYY-MM-DD') AS departure, m.travel_days
-           FROM permits p JOIN moves m ON m.id = p.move_id
-          WHERE p.status = 'issued' AND p.valid_to IS NOT NULL AND m.stage IN (${ACTIVE_MOVE_STAGES.map((s) => `'${s}'`).join(',')})
-          FOR UPDATE OF p`,
-      );
+    const result = await this.repo.transaction(async (m) => {
+      if (!(await this.repo.tryScanLock(m))) return { ran: false, checked: 0, flagged: [] } as ExpiryScanResult;
+      const rows = await this.repo.issuedForScan(m);
       const flagged: ExpiryScanResult['flagged'] = [];
       for (const r of rows) {
         const tz = zoneOf(r.jurisdiction);
@@ -85,7 +71,7 @@ export class ExpiryScanService {
         if (validTo <= now) warning = `expired ${shown}`;
         else if (validTo < exit) warning = `expires ${shown}, before the planned exit at the end of ${dates[dates.length - 1]}`;
         else if (validTo.getTime() - now.getTime() <= EXPIRY_WARNING_HOURS * 3_600_000) warning = `expires within ${EXPIRY_WARNING_HOURS} hours (${shown})`;
-        await m.query(`UPDATE permits SET expiry_warning = $2, expiry_checked_at = $3 WHERE id = $1`, [r.id, warning, now]);
+        await this.repo.setExpiryWarning(m, r.id, warning, now);
         if (warning !== r.expiry_warning) {
           await this.audit.record(m, {
             moveId: r.move_id, entity: 'permit', entityId: r.id, action: warning ? 'expiry_flagged' : 'expiry_cleared', actorId: null,

@@ -1,13 +1,12 @@
 import {
-  jurisdictionByCode, localDate, permitUrgency,
+  fileByDate, jurisdictionByCode, localDate, permitUrgency, usd, zoneOf,
   type MoveStage, type PaymentDto, type PaymentStatus, type PermitConditions, type PermitDocumentDto, type PermitStatus, type PermitSummaryDto, type PermitType, type PermitVersionDto,
 } from '@amberline/common';
 import type { PermitDocument } from './entities/permit-document.entity';
 import type { PermitPayment } from './entities/permit-payment.entity';
 import type { PermitVersion } from './entities/permit-version.entity';
-import { usd, zoneOf } from './permit-rules';
 
-/** The columns the queue query selects (see PERMIT_SUMMARY_SQL). */
+/** The columns the queue query selects (see permitSummarySql in permits.repository). */
 export type PermitRow = {
   id: string;
   version: number;
@@ -32,35 +31,15 @@ export type PermitRow = {
   move_stage: MoveStage;
   customer: string;
   departure: string;
-  file_by: string;
   document_count: number;
   payment_status: PaymentStatus | null;
 };
 
-/**
- * Everything the queue shows of a permit, one row per permit, with its move, assignee, PDFs and payment. `permits`
- * is the table, or a derived table of the permits wanted (a page picked on the permit's own columns first, so the
- * joins and per-permit look-ups run for those rows only).
- */
-export const permitSummarySql = (permits = 'permits') => `
-  SELECT p.id, p.version, p.move_id, p.jurisdiction, p.permit_type, p.status, p.needed, p.permit_number, p.valid_from, p.valid_to,
-         p.estimated_fee_cents, p.actual_fee_cents, p.lead_time_days, p.lead_time_known, p.assignee_id, u.name AS assignee_name, p.amendment_reason,
-         p.expiry_warning, p.updated_at, m.reference AS move_reference, m.stage AS move_stage, m.customer,
-         to_char(m.requested_departure, 'YYYY-MM-DD') AS departure,
-         to_char(m.requested_departure - p.lead_time_days, 'YYYY-MM-DD') AS file_by,
-         (SELECT count(*)::int FROM permit_documents d WHERE d.permit_id = p.id) AS document_count,
-         COALESCE(
-           (SELECT 'succeeded' FROM permit_payments x WHERE x.permit_id = p.id AND x.status = 'succeeded' LIMIT 1),
-           (SELECT x.status FROM permit_payments x WHERE x.permit_id = p.id ORDER BY x.attempt DESC LIMIT 1)
-         ) AS payment_status
-    FROM ${permits} p
-    JOIN moves m ON m.id = p.move_id
-    LEFT JOIN users u ON u.id = p.assignee_id`;
-export const PERMIT_SUMMARY_SQL = permitSummarySql();
 
 /** `now` gives today's date in the permit's own state for the urgency. */
 export function toSummaryDto(r: PermitRow, now: Date): PermitSummaryDto {
-  const { urgency, daysLeft } = permitUrgency(r.status, r.file_by, localDate(now.getTime(), zoneOf(r.jurisdiction)));
+  const fileBy = fileByDate(r.departure, r.lead_time_days);
+  const { urgency, daysLeft } = permitUrgency(r.status, fileBy, localDate(now.getTime(), zoneOf(r.jurisdiction)));
   return {
     id: r.id,
     version: r.version,
@@ -75,7 +54,7 @@ export function toSummaryDto(r: PermitRow, now: Date): PermitSummaryDto {
     status: r.status,
     permitNumber: r.permit_number,
     departure: r.departure,
-    fileBy: r.file_by,
+    fileBy,
     leadTimeDays: r.lead_time_known ? r.lead_time_days : null,
     urgency,
     daysToFileBy: daysLeft,

@@ -1,12 +1,15 @@
 import { Injectable, OnModuleInit } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
-import { describeDaylight, describeHolidays, describeWeekends, PERMIT_STATUS_LABELS, type RunSheetPermit } from '@amberline/common';
+import {
+  describeDaylight, describeHolidays, describeWeekends, instantToLocal, PERMIT_STATUS_LABELS, travelSpan, zoneOf, type RunSheetPermit,
+} from '@amberline/common';
 import { travelDates } from '../moves/assessment.service';
-import { preparedQuery } from '../database/prepared';
-import type { Move } from '../moves/entities/move.entity';
 import { RunSheetSourcesRegistry, type RunSheetSource } from '../run-sheets/run-sheet-sources';
-import { Permit } from './entities/permit.entity';
-import { instantToLocal, travelSpan, zoneOf } from './permit-rules';
+import type { Permit } from './entities/permit.entity';
+import { PermitsRepository, type RunSheetPermitRow } from './permits.repository';
+
+/** The move a run sheet is built for, as the run-sheet module hands it over. */
+type Move = Parameters<NonNullable<RunSheetSource['permits']>>[0];
 
 /** Plain lines for the permit's structured conditions, as the driver reads them. */
 function conditionLines(p: Pick<Permit, 'conditions' | 'conditionsText' | 'routeText'>): string[] {
@@ -28,34 +31,22 @@ function conditionLines(p: Pick<Permit, 'conditions' | 'conditionsText' | 'route
   return out;
 }
 
-type RunSheetPermitRow = Pick<
-  Permit,
-  'id' | 'jurisdiction' | 'status' | 'permitNumber' | 'validFrom' | 'validTo' | 'permitted' | 'conditions' | 'conditionsText' | 'routeText' | 'amendmentReason' | 'expiryWarning'
-> & { documentId: string | null };
-
 /** Gives the driver's run sheet the move's permits (number, validity, conditions, PDF) and the permitted dimensions. */
 @Injectable()
 export class PermitsRunSheetSource implements RunSheetSource, OnModuleInit {
   readonly name = 'permits';
   /** One read of a move's permits per run-sheet build (both methods receive the same move object). */
   private readonly loaded = new WeakMap<Move, Promise<RunSheetPermitRow[]>>();
-  constructor(private readonly registry: RunSheetSourcesRegistry) {}
+  constructor(
+    private readonly registry: RunSheetSourcesRegistry,
+    private readonly repo: PermitsRepository,
+  ) {}
 
   /** The move's permits with each one's latest PDF, in one statement. */
   private permitsOf(move: Move, manager: EntityManager): Promise<RunSheetPermitRow[]> {
     let p = this.loaded.get(move);
     if (!p) {
-      p = preparedQuery<RunSheetPermitRow>(
-        manager,
-        `SELECT p.id, p.jurisdiction, p.status, p.permit_number AS "permitNumber", p.valid_from AS "validFrom", p.valid_to AS "validTo",
-                p.permitted, p.conditions, p.conditions_text AS "conditionsText", p.route_text AS "routeText",
-                p.amendment_reason AS "amendmentReason", p.expiry_warning AS "expiryWarning",
-                (SELECT d.id FROM permit_documents d WHERE d.permit_id = p.id ORDER BY d.version DESC LIMIT 1) AS "documentId"
-           FROM permits p
-          WHERE p.move_id = $1 AND p.status <> 'void'
-          ORDER BY p.jurisdiction, p.created_at`,
-        [move.id],
-      );
+      p = this.repo.runSheetRows(manager, move.id);
       this.loaded.set(move, p);
     }
     return p;

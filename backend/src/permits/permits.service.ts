@@ -1,47 +1,35 @@
 import { Injectable, OnModuleInit } from '@nestjs/common';
-import { DataSource, EntityManager, In, Not } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import {
-  canPermitTransition, OPEN_PERMIT_STATUSES, PERMIT_STATUS_LABELS, PERMIT_STATUSES,
+  canPermitTransition, cents, DOMAIN_ERRORS, DomainError, factsFromAssessment, instantToLocal, PERMIT_STATUS_LABELS, PERMIT_STATUSES, permittedDifferences, zoneOf,
   type AssessmentDto, type AssignPermitsResponse, type PermitDto, type PermitOverviewDto, type PermitsPage, type PermitStatus,
   type SessionUser, type SyncPermitsResponse, type UnmetCondition,
   type PermitConditions, type PermitTerms, checkPermitTravelTerms, datesByState, formatZoned, validityGaps,
 } from '@amberline/common';
 import { AuditService, diff } from '../audit/audit.service';
-import { preparedQuery } from '../database/prepared';
-import { AppException, fieldError } from '../core/app-exception';
-import { travelDates } from '../moves/assessment.service';
-import { Move } from '../moves/entities/move.entity';
+import { fieldError } from '../core/app-exception';
 import { MoveExtensionsRegistry, type PlanChangeContext, type TransitionContext } from '../moves/move-extensions';
 import { MovesService } from '../moves/moves.service';
 import { planOf } from '../moves/schedule.service';
-import { User } from '../users/entities/user.entity';
 import { AssignPermitsDto, ListPermitsQuery, UpdatePermitDto } from './dto/permit.dto';
-import { PermitDocument } from './entities/permit-document.entity';
-import { PermitPayment } from './entities/permit-payment.entity';
-import { PermitVersion } from './entities/permit-version.entity';
-import { Permit } from './entities/permit.entity';
-import { PERMIT_SUMMARY_SQL, permitSummarySql, snapshotOf, toDocumentDto, toPaymentDto, toSummaryDto, toVersionDto, type PermitRow } from './permit-mappers';
-import { cents, factsFromAssessment, instantToLocal, localToInstant, permittedDifferences, travelSpan, zoneOf } from './permit-rules';
+import type { Permit } from './entities/permit.entity';
+import { snapshotOf, toDocumentDto, toPaymentDto, toSummaryDto, toVersionDto } from './permit-mappers';
+import { localInstantOf } from './permit-input';
+import { ACTIVE_MOVE_STAGES, PermitsRepository } from './permits.repository';
 
-/** Move stages in which permits still matter (the expiry scan and the lists look only at these). */
-export const ACTIVE_MOVE_STAGES = ['requested', 'permits_received', 'escorts_booked', 'running'] as const;
+export { ACTIVE_MOVE_STAGES };
 
-const SORTS: Record<string, string> = {
-  // open permits first, by the date they must be filed by, then departure (columns kept on the permit row, indexed)
-  urgency: `p.urgency_group, p.file_by ASC, p.departure ASC`,
-  departure: 'p.departure ASC, p.jurisdiction ASC',
-  '-departure': 'p.departure DESC, p.jurisdiction ASC',
-  jurisdiction: 'p.jurisdiction ASC, p.departure ASC',
-  status: `array_position(ARRAY['to_file','needs_amendment','rejected','filed','issued','void']::varchar[], p.status), p.departure ASC`,
-  updated: 'p.updated_at DESC',
-};
+/** A move as the moves module hands it over. */
+type MoveRecord = Awaited<ReturnType<MovesService['get']>>;
+/** A permit with its move's driver and reference (see PermitsRepository.findWithMove). */
+type PermitWithMove = Permit & { moveDriverId: string | null; moveReference: string };
 
 type Change = { action: string; reason?: string | null };
 
 @Injectable()
 export class PermitsService implements OnModuleInit {
   constructor(
-    private readonly ds: DataSource,
+    private readonly repo: PermitsRepository,
     private readonly audit: AuditService,
     private readonly moves: MovesService,
     private readonly registry: MoveExtensionsRegistry,
@@ -53,11 +41,8 @@ export class PermitsService implements OnModuleInit {
       unmetConditions: (ctx) => this.unmetConditions(ctx),
       permitTerms: (move, manager) => this.permitTerms(move.id, manager),
       scheduleFacts: async ({ manager, move }) => {
-        const rows: { jurisdiction: string; valid_from: Date | null; valid_to: Date | null }[] = await manager.query(
-          `SELECT jurisdiction, valid_from, valid_to FROM permits WHERE move_id = $1 AND status = 'issued' AND valid_from IS NOT NULL AND valid_to IS NOT NULL`,
-          [move.id],
-        );
-        return { permits: Object.fromEntries(rows.map((r) => [r.jurisdiction, { validFrom: new Date(r.valid_from!).toISOString(), validTo: new Date(r.valid_to!).toISOString() }])) };
+        const rows = await this.repo.issuedValidity(manager, move.id);
+        return { permits: Object.fromEntries(rows.map((r) => [r.jurisdiction, { validFrom: new Date(r.valid_from).toISOString(), validTo: new Date(r.valid_to).toISOString() }])) };
       },
       onPlanChanged: (ctx) => this.onPlanChanged(ctx),
       afterTransition: (ctx) => (ctx.to === 'cancelled' ? this.voidForCancelledMove(ctx.manager, ctx.move.id, ctx.actor) : Promise.resolve()),
@@ -71,11 +56,7 @@ export class PermitsService implements OnModuleInit {
    * only when the clerk recorded both front and rear.
    */
   async permitTerms(moveId: string, manager?: EntityManager): Promise<Record<string, PermitTerms>> {
-    const rows = await preparedQuery<{ jurisdiction: string; permit_number: string | null; issued_at: Date | null; conditions: PermitConditions | null }>(
-      manager ?? this.ds,
-      `SELECT jurisdiction, permit_number, issued_at, conditions FROM permits WHERE move_id = $1 AND status = 'issued' ORDER BY jurisdiction, created_at`,
-      [moveId],
-    );
+    const rows = await this.repo.issuedTerms(moveId, manager);
     const out: Record<string, PermitTerms> = {};
     for (const r of rows) {
       const c = r.conditions ?? {};
@@ -92,58 +73,26 @@ export class PermitsService implements OnModuleInit {
     return out;
   }
 
-  private async rows(where: string, params: unknown[], manager?: EntityManager, tail = ''): Promise<PermitRow[]> {
-    return (manager ?? this.ds.manager).query(`${PERMIT_SUMMARY_SQL} WHERE ${where} ${tail}`, params);
-  }
-
   async list(q: ListPermitsQuery, viewer: SessionUser, now: Date): Promise<PermitsPage> {
-    const where: string[] = [];
-    const params: unknown[] = [];
-    const add = (sql: string, v: unknown) => {
-      params.push(v);
-      where.push(sql.replace('?', `$${params.length}`));
-    };
-    if (q.status === 'open') where.push(`p.status IN (${OPEN_PERMIT_STATUSES.map((x) => `'${x}'`).join(',')})`);
-    else if (q.status) add('p.status = ?', q.status);
-    else where.push(`p.status <> 'void'`);
-    if (q.jurisdiction) add('p.jurisdiction = ?', q.jurisdiction);
-    if (q.moveId) add('p.move_id = ?', q.moveId);
-    if (q.assignee === 'none') where.push('p.assignee_id IS NULL');
-    else if (q.assignee) add('p.assignee_id = ?', q.assignee === 'me' ? viewer.id : q.assignee);
-    const cond = where.length ? where.join(' AND ') : 'true';
-    const [{ n }] = await preparedQuery<{ n: number }>(this.ds, `SELECT count(*)::int AS n FROM permits p WHERE ${cond}`, params);
-    // the page is picked on the permit's own columns (filters and sort keys all live on the permit row, the move's
-    // departure kept there by trigger), then joined, so the per-permit document and payment look-ups run for 20 rows
-    const order = `${SORTS[q.sort] ?? SORTS.urgency}, p.id`;
-    const page = `(SELECT * FROM permits p WHERE ${cond} ORDER BY ${order} LIMIT $${params.length + 1} OFFSET $${params.length + 2})`;
-    const rows = await preparedQuery<PermitRow>(this.ds, `${permitSummarySql(page)} ORDER BY ${order}`, [...params, q.pageSize, (q.page - 1) * q.pageSize]);
-    return { items: rows.map((r) => toSummaryDto(r, now)), total: n, page: q.page, pageSize: q.pageSize };
+    const assignee = q.assignee === 'me' ? viewer.id : q.assignee;
+    const { rows, total } = await this.repo.page({ status: q.status, jurisdiction: q.jurisdiction, moveId: q.moveId, assignee }, q.sort, q.page, q.pageSize);
+    return { items: rows.map((r) => toSummaryDto(r, now)), total, page: q.page, pageSize: q.pageSize };
   }
 
   async overview(now: Date): Promise<PermitOverviewDto> {
     const counts = Object.fromEntries(PERMIT_STATUSES.map((s) => [s, 0])) as Record<PermitStatus, number>;
-    const byStatus: { status: PermitStatus; n: number }[] = await this.ds.query(`SELECT status, count(*)::int AS n FROM permits GROUP BY status`);
-    for (const r of byStatus) counts[r.status] = r.n;
-    const active = `m.stage IN (${ACTIVE_MOVE_STAGES.map((s) => `'${s}'`).join(',')})`;
-    const expiring = await this.rows(
-      `${active} AND p.status = 'issued' AND (p.expiry_warning IS NOT NULL OR p.valid_to < $1::timestamptz + interval '7 days')`,
-      [now.toISOString()],
-      undefined,
-      'ORDER BY p.valid_to ASC NULLS LAST, p.id LIMIT 50',
-    );
-    const amend = await this.rows(`${active} AND p.status = 'needs_amendment'`, [], undefined, 'ORDER BY m.requested_departure ASC, p.id LIMIT 50');
-    const [{ overdue }] = await this.ds.query(
-      `SELECT count(*)::int AS overdue FROM permits p JOIN moves m ON m.id = p.move_id
-        WHERE ${active} AND p.status NOT IN ('issued','void') AND (m.requested_departure - p.lead_time_days) < $1::date`,
-      [now.toISOString().slice(0, 10)],
-    );
+    for (const r of await this.repo.countsByStatus()) counts[r.status] = r.n;
+    const expiring = await this.repo.expiringSoon(now);
+    const amend = await this.repo.needingAmendment();
+    // overdue: the file-by date (see fileByDate) is before today's date
+    const overdue = await this.repo.countPastFileBy(now.toISOString().slice(0, 10));
     return { counts, overdue, expiringSoon: expiring.map((r) => toSummaryDto(r, now)), needsAmendment: amend.map((r) => toSummaryDto(r, now)) };
   }
 
   /** The permit row, 404 when missing or (for a driver) not on one of their moves. */
-  async load(id: string, viewer?: SessionUser, manager?: EntityManager): Promise<Permit> {
-    const p = await (manager ?? this.ds.manager).findOne(Permit, { where: { id }, relations: { move: true } });
-    if (!p || (viewer?.role === 'driver' && p.move?.driverId !== viewer.id)) throw new AppException(404, 'not_found', `No permit ${id}`);
+  async load(id: string, viewer?: SessionUser, manager?: EntityManager): Promise<PermitWithMove> {
+    const p = await this.repo.findWithMove(id, manager);
+    if (!p || (viewer?.role === 'driver' && p.moveDriverId !== viewer.id)) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No permit ${id}`);
     return p;
   }
 
@@ -154,20 +103,19 @@ export class PermitsService implements OnModuleInit {
 
   async forMove(moveId: string, viewer: SessionUser, now: Date): Promise<PermitDto[]> {
     await this.moves.get(moveId, viewer);
-    const list = await this.ds.manager.find(Permit, { where: { moveId }, relations: { move: true }, order: { jurisdiction: 'ASC', createdAt: 'ASC' } });
-    return this.details(list, now);
+    return this.details(await this.repo.ofMoveWithMove(moveId), now);
   }
 
-  private async details(list: Permit[], now: Date): Promise<PermitDto[]> {
+  private async details(list: PermitWithMove[], now: Date): Promise<PermitDto[]> {
     if (!list.length) return [];
     const ids = list.map((p) => p.id);
-    const rows = new Map((await this.rows('p.id = ANY($1)', [ids])).map((r) => [r.id, r]));
-    const docs = await this.ds.manager.find(PermitDocument, { where: { permitId: In(ids) }, relations: { uploadedBy: true }, order: { version: 'DESC' } });
-    const pays = await this.ds.manager.find(PermitPayment, { where: { permitId: In(ids) }, relations: { createdBy: true }, order: { attempt: 'DESC' } });
-    const versions = await this.ds.manager.find(PermitVersion, { where: { permitId: In(ids) }, relations: { createdBy: true }, order: { version: 'DESC' } });
+    const rows = new Map((await this.repo.summariesByIds(ids)).map((r) => [r.id, r]));
+    const docs = await this.repo.documentsOf(ids);
+    const pays = await this.repo.paymentsOf(ids);
+    const versions = await this.repo.versionsOf(ids);
     return list.map((p) => {
       const tz = zoneOf(p.jurisdiction);
-      const ctx = { moveReference: p.move?.reference ?? '', jurisdiction: p.jurisdiction, permitNumber: p.permitNumber };
+      const ctx = { moveReference: p.moveReference, jurisdiction: p.jurisdiction, permitNumber: p.permitNumber };
       return {
         ...toSummaryDto(rows.get(p.id)!, now),
         filedAt: p.filedAt?.toISOString() ?? null,
@@ -199,35 +147,23 @@ export class PermitsService implements OnModuleInit {
     if (!Object.keys(d.after).length) return;
     after.version = before.version + 1;
     after.updatedAt = now;
-    const res = await m
-      .createQueryBuilder()
-      .update(Permit)
-      .set({
-        status: after.status, permitType: after.permitType, needed: after.needed, permitNumber: after.permitNumber, filedAt: after.filedAt, issuedAt: after.issuedAt,
-        validFrom: after.validFrom, validTo: after.validTo, permitted: after.permitted, routeText: after.routeText, conditions: after.conditions,
-        conditionsText: after.conditionsText, estimatedFeeCents: after.estimatedFeeCents, actualFeeCents: after.actualFeeCents, refundable: after.refundable,
-        ruleVersion: after.ruleVersion, leadTimeDays: after.leadTimeDays, assigneeId: after.assigneeId, notes: after.notes, amendmentReason: after.amendmentReason,
-        expiryWarning: after.expiryWarning, version: after.version, updatedAt: now,
-      })
-      .where('id = :id AND version = :v', { id: before.id, v: before.version })
-      .execute();
-    if (res.affected !== 1) throw new AppException(409, 'conflict', 'This permit was changed by someone else; reload it');
-    await m.insert(PermitVersion, { permitId: after.id, version: after.version, status: after.status, snapshot: a, reason: change.reason ?? null, createdById: actor?.id ?? null });
+    if (!(await this.repo.updateVersioned(m, before, after, now))) throw new DomainError(DOMAIN_ERRORS.VERSION_CONFLICT, 'This permit was changed by someone else; reload it');
+    await this.repo.insertVersion(m, { permitId: after.id, version: after.version, status: after.status, snapshot: a, reason: change.reason ?? null, createdById: actor?.id ?? null });
     await this.audit.record(m, {
       moveId: after.moveId, entity: 'permit', entityId: after.id, action: change.action, actorId: actor?.id ?? null, before: d.before, after: { jurisdiction: after.jurisdiction, ...d.after }, reason: change.reason ?? null,
     });
   }
 
   async syncForMove(moveId: string, actor: SessionUser, now: Date): Promise<SyncPermitsResponse> {
-    const out = await this.ds.transaction(async (m) => {
-      const locked = await m.findOne(Move, { where: { id: moveId }, lock: { mode: 'pessimistic_write' } });
-      if (!locked) throw new AppException(404, 'not_found', `No move ${moveId}`);
-      if (locked.stage === 'delivered' || locked.stage === 'cancelled') throw new AppException(409, 'conflict', `A ${locked.stage} move needs no permits`);
+    const out = await this.repo.transaction(async (m) => {
+      const locked = await this.repo.lockMove(m, moveId);
+      if (!locked) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No move ${moveId}`);
+      if (locked.stage === 'delivered' || locked.stage === 'cancelled') throw new DomainError(DOMAIN_ERRORS.RECORD_CLOSED, `A ${locked.stage} move needs no permits`);
       const move = await this.moves.get(moveId, undefined, m);
       const assessment = await this.moves.assessmentOf(move, now, m);
       return this.syncInTx(m, move, assessment, actor, now, 'from the assessment');
     });
-    const rows = await this.rows(`p.move_id = $1 AND p.status <> 'void'`, [moveId], undefined, 'ORDER BY p.jurisdiction');
+    const rows = await this.repo.liveSummariesOfMove(moveId);
     return { ...out, permits: rows.map((r) => toSummaryDto(r, now)) };
   }
 
@@ -236,10 +172,9 @@ export class PermitsService implements OnModuleInit {
    * lead times refreshed, filed or issued permits whose figures no longer cover the plan flagged for amendment,
    * open permits no longer needed voided.
    */
-  async syncInTx(m: EntityManager, move: Move, assessment: AssessmentDto, actor: SessionUser | null, now: Date, why: string): Promise<{ created: number; updated: number }> {
-    const live = await m.find(Permit, { where: { moveId: move.id, status: Not('void') }, lock: { mode: 'pessimistic_write' } });
+  async syncInTx(m: EntityManager, move: MoveRecord, assessment: AssessmentDto, actor: SessionUser | null, now: Date, why: string): Promise<{ created: number; updated: number }> {
+    const live = await this.repo.lockLiveOfMove(m, move.id);
     const byCode = new Map(live.map((p) => [p.jurisdiction, p]));
-    const dates = travelDates(move.requestedDeparture, move.travelDays);
     let created = 0;
     let updated = 0;
     for (const j of assessment.result.jurisdictions) {
@@ -252,7 +187,7 @@ export class PermitsService implements OnModuleInit {
       const ruleVersion = assessment.ruleVersions[j.code] ?? null;
       if (j.permitRequired && !existing) {
         const roads = move.route.filter((s) => s.jurisdiction === j.code).map((s) => `${s.roads} (${s.miles} mi)`).join('; ');
-        const p = m.create(Permit, {
+        const saved = await this.repo.insert(m, {
           moveId: move.id,
           jurisdiction: j.code,
           permitType: j.superload.isSuperload ? 'superload' : 'single_trip',
@@ -269,8 +204,7 @@ export class PermitsService implements OnModuleInit {
             ? { escortsKnown: true, escortsFront: j.escorts.front, escortsRear: j.escorts.rear, heightPole: j.escorts.heightPole }
             : { escortsKnown: false },
         });
-        const saved = await m.save(p);
-        await m.insert(PermitVersion, { permitId: saved.id, version: 1, status: 'to_file', snapshot: snapshotOf(saved), reason: why, createdById: actor?.id ?? null });
+        await this.repo.insertVersion(m, { permitId: saved.id, version: 1, status: 'to_file', snapshot: snapshotOf(saved), reason: why, createdById: actor?.id ?? null });
         await this.audit.record(m, {
           moveId: move.id, entity: 'permit', entityId: saved.id, action: 'created', actorId: actor?.id ?? null,
           after: { jurisdiction: j.code, status: 'to_file', estimatedFeeCents: estimate, ruleVersion }, reason: why,
@@ -279,7 +213,7 @@ export class PermitsService implements OnModuleInit {
         continue;
       }
       if (!existing) continue;
-      const next = m.create(Permit, { ...existing });
+      const next = this.repo.copy(existing);
       const reasons: string[] = [];
       if (!j.permitRequired) {
         next.needed = false;
@@ -315,7 +249,7 @@ export class PermitsService implements OnModuleInit {
     }
     // jurisdictions no longer on the route at all
     for (const existing of byCode.values()) {
-      const next = m.create(Permit, { ...existing, needed: false });
+      const next = this.repo.copy(existing, { needed: false });
       if (existing.status === 'to_file' || existing.status === 'rejected') next.status = 'void';
       else if (existing.status !== 'needs_amendment') {
         next.status = 'needs_amendment';
@@ -328,20 +262,20 @@ export class PermitsService implements OnModuleInit {
   }
 
   async update(id: string, dto: UpdatePermitDto, actor: SessionUser, now: Date): Promise<PermitDto> {
-    await this.ds.transaction(async (m) => {
-      const before = await m.findOne(Permit, { where: { id }, lock: { mode: 'pessimistic_write' } });
-      if (!before) throw new AppException(404, 'not_found', `No permit ${id}`);
+    await this.repo.transaction(async (m) => {
+      const before = await this.repo.lock(m, id);
+      if (!before) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No permit ${id}`);
       if (before.version !== dto.version) {
-        throw new AppException(409, 'conflict', `This permit was changed by someone else (version ${before.version}, yours ${dto.version}); reload it`, { currentVersion: before.version });
+        throw new DomainError(DOMAIN_ERRORS.VERSION_CONFLICT, `This permit was changed by someone else (version ${before.version}, yours ${dto.version}); reload it`, { currentVersion: before.version });
       }
-      if (before.status === 'void') throw new AppException(409, 'conflict', 'A void permit cannot be changed');
+      if (before.status === 'void') throw new DomainError(DOMAIN_ERRORS.RECORD_CLOSED, 'A void permit cannot be changed');
       const tz = zoneOf(before.jurisdiction);
-      const next = m.create(Permit, { ...before });
+      const next = this.repo.copy(before);
       if (dto.permitType !== undefined) next.permitType = dto.permitType;
       if (dto.permitNumber !== undefined) next.permitNumber = dto.permitNumber?.trim() || null;
       if (dto.issuedAt !== undefined) next.issuedAt = dto.issuedAt ? new Date(dto.issuedAt) : null;
-      if (dto.validFrom !== undefined) next.validFrom = dto.validFrom ? localToInstant(dto.validFrom, tz, 'validFrom') : null;
-      if (dto.validTo !== undefined) next.validTo = dto.validTo ? localToInstant(dto.validTo, tz, 'validTo') : null;
+      if (dto.validFrom !== undefined) next.validFrom = dto.validFrom ? localInstantOf(dto.validFrom, tz, 'validFrom') : null;
+      if (dto.validTo !== undefined) next.validTo = dto.validTo ? localInstantOf(dto.validTo, tz, 'validTo') : null;
       if (dto.routeText !== undefined) next.routeText = dto.routeText?.trim() || null;
       if (dto.conditions !== undefined) {
         const conditions: PermitConditions = JSON.parse(JSON.stringify(dto.conditions));
@@ -366,7 +300,7 @@ export class PermitsService implements OnModuleInit {
       let action = 'updated';
       if (dto.status && dto.status !== before.status) {
         if (!canPermitTransition(before.status, dto.status)) {
-          throw new AppException(409, 'conflict', `A permit cannot go from ${PERMIT_STATUS_LABELS[before.status]} to ${PERMIT_STATUS_LABELS[dto.status]}`);
+          throw new DomainError(DOMAIN_ERRORS.TRANSITION_REFUSED, `A permit cannot go from ${PERMIT_STATUS_LABELS[before.status]} to ${PERMIT_STATUS_LABELS[dto.status]}`);
         }
         if ((dto.status === 'rejected' || dto.status === 'void' || dto.status === 'needs_amendment') && !dto.reason?.trim()) {
           throw fieldError('reason', `say why the permit is ${PERMIT_STATUS_LABELS[dto.status].toLowerCase()}`);
@@ -398,29 +332,27 @@ export class PermitsService implements OnModuleInit {
   }
 
   /** Who permits can be assigned to: active permit clerks and admins. */
-  async assignees(): Promise<{ id: string; name: string; role: string }[]> {
-    const rows = await this.ds.manager.find(User, { where: { active: true, role: In(['permit_clerk', 'admin']) }, order: { name: 'ASC' } });
-    return rows.map((u) => ({ id: u.id, name: u.name, role: u.role }));
+  assignees(): Promise<{ id: string; name: string; role: string }[]> {
+    return this.repo.assignees();
   }
 
-  private async checkAssignee(m: EntityManager, userId: string, field: string): Promise<User> {
-    const u = await m.findOneBy(User, { id: userId });
+  private async checkAssignee(m: EntityManager, userId: string, field: string): Promise<void> {
+    const u = await this.repo.user(m, userId);
     if (!u || !u.active || (u.role !== 'permit_clerk' && u.role !== 'admin')) throw fieldError(field, 'no active permit clerk or admin with this id');
-    return u;
   }
 
   async assign(dto: AssignPermitsDto, actor: SessionUser, now: Date): Promise<AssignPermitsResponse> {
     const ids = [...new Set(dto.permitIds)];
-    return this.ds.transaction(async (m) => {
+    return this.repo.transaction(async (m) => {
       if (dto.assigneeId) await this.checkAssignee(m, dto.assigneeId, 'assigneeId');
-      const list = await m.find(Permit, { where: { id: In(ids) }, order: { id: 'ASC' }, lock: { mode: 'pessimistic_write' } });
+      const list = await this.repo.lockMany(m, ids);
       const found = new Set(list.map((p) => p.id));
       const missing = ids.filter((i) => !found.has(i));
       if (missing.length) throw fieldError('permitIds', `no permit ${missing.join(', ')}`);
       let updated = 0;
       for (const p of list) {
         if (p.status === 'void' || p.assigneeId === dto.assigneeId) continue;
-        await this.saveChange(m, p, m.create(Permit, { ...p, assigneeId: dto.assigneeId }), actor, { action: 'assigned' }, now);
+        await this.saveChange(m, p, this.repo.copy(p, { assigneeId: dto.assigneeId }), actor, { action: 'assigned' }, now);
         updated++;
       }
       return { updated };
@@ -432,15 +364,15 @@ export class PermitsService implements OnModuleInit {
   /** A cancelled move's open permits are voided in the cancelling transaction (refunds stay a clerk's decision). */
   private async voidForCancelledMove(m: EntityManager, moveId: string, actor: SessionUser): Promise<void> {
     const now = new Date();
-    const open = await m.find(Permit, { where: { moveId, status: Not('void') }, lock: { mode: 'pessimistic_write' } });
+    const open = await this.repo.lockLiveOfMove(m, moveId);
     for (const p of open) {
-      await this.saveChange(m, p, m.create(Permit, { ...p, status: 'void' }), actor, { action: 'voided', reason: 'the move was cancelled' }, now);
+      await this.saveChange(m, p, this.repo.copy(p, { status: 'void' }), actor, { action: 'voided', reason: 'the move was cancelled' }, now);
     }
   }
 
   private async onPlanChanged(ctx: PlanChangeContext): Promise<void> {
     const now = new Date();
-    const any = await ctx.manager.count(Permit, { where: { moveId: ctx.after.id, status: Not('void') } });
+    const any = await this.repo.countLiveOfMove(ctx.manager, ctx.after.id);
     if (!any) return; // permits not created yet: nothing to follow
     const assessment = await this.moves.assessmentOf(ctx.after, now, ctx.manager);
     await this.syncInTx(ctx.manager, ctx.after, assessment, ctx.actor, now, `plan changed (${ctx.changed.join(', ')})`);
@@ -456,12 +388,7 @@ export class PermitsService implements OnModuleInit {
     if (ctx.to !== 'permits_received' && ctx.to !== 'running') return [];
     const needed = ctx.assessment.result.summary.permitsNeeded;
     if (!needed.length) return [];
-    const rows: (PermitRow & { paid_any: boolean })[] = await ctx.manager.query(
-      `SELECT q.*, EXISTS (SELECT 1 FROM permit_payments x WHERE x.permit_id = q.id AND x.status = 'succeeded') AS paid_any
-         FROM (${PERMIT_SUMMARY_SQL} WHERE p.move_id = $1 AND p.status <> 'void') q`,
-      [ctx.move.id],
-    );
-    const dates = travelDates(ctx.move.requestedDeparture, ctx.move.travelDays);
+    const rows = await this.repo.liveWithPaid(ctx.manager, ctx.move.id);
     const out: UnmetCondition[] = [];
     for (const code of needed) {
       const p = rows.find((r) => r.jurisdiction === code);
@@ -502,10 +429,7 @@ export class PermitsService implements OnModuleInit {
   private async escortsAnsweredByPermits(ctx: TransitionContext): Promise<UnmetCondition[]> {
     const open = ctx.assessment.result.summary.escortsNotOnFile;
     if (!open.length) return [];
-    const rows: { jurisdiction: string; conditions: PermitConditions }[] = await ctx.manager.query(
-      `SELECT jurisdiction, conditions FROM permits WHERE move_id = $1 AND status = 'issued' AND jurisdiction = ANY($2)`,
-      [ctx.move.id, open],
-    );
+    const rows = await this.repo.issuedConditionsIn(ctx.manager, ctx.move.id, open);
     return open
       .filter((code) => {
         const c = rows.find((r) => r.jurisdiction === code)?.conditions;

@@ -6,6 +6,7 @@ import { PermitQueueOrder1764660000000 } from './1764660000000-permit-queue-orde
 import { EscortsAndMail1764640000000 } from './1764640000000-escorts-and-mail';
 import { RulebookFacts1764670000000 } from './1764670000000-rulebook-facts';
 import { FrozenAssessments1764680000000 } from './1764680000000-frozen-assessments';
+import { GeneratedColumnMetadata1764690000000 } from './1764690000000-generated-column-metadata';
 
 /** Every migration, in order. Add new ones at the end; never edit one that has landed. */
 export const MIGRATIONS = [
@@ -17,4 +18,5 @@ export const MIGRATIONS = [
   PermitQueueOrder1764660000000,
   RulebookFacts1764670000000,
   FrozenAssessments1764680000000,
+  GeneratedColumnMetadata1764690000000,
 ];

@@ -3,6 +3,9 @@ import type { PermitConditions, PermitStatus, PermitType, PermittedFacts } from 
 import { Move } from '../../moves/entities/move.entity';
 import { User } from '../../users/entities/user.entity';
 
+/** The stored expression of `urgency_group` (as the migration wrote it). */
+export const URGENCY_GROUP_SQL = `CASE WHEN status IN ('issued','void') THEN 1 ELSE 0 END`;
+
 /** One jurisdiction's permit for one move. */
 @Entity({ name: 'permits' })
 export class Permit {
@@ -36,6 +39,13 @@ export class Permit {
   @Column({ name: 'amendment_reason', type: 'text', nullable: true }) amendmentReason: string | null;
   @Column({ name: 'expiry_warning', type: 'text', nullable: true }) expiryWarning: string | null;
   @Column({ name: 'expiry_checked_at', type: 'timestamptz', nullable: true }) expiryCheckedAt: Date | null;
+  /** The move's requested departure, kept on the permit row by a trigger (the queue sorts on it). */
+  @Column({ type: 'date', nullable: true, insert: false, update: false }) departure: string | null;
+  /** The date to file by (departure less the lead time, see fileByDate), kept on the row by a trigger. */
+  @Column({ name: 'file_by', type: 'date', nullable: true, insert: false, update: false }) fileBy: string | null;
+  /** 0 while the permit is open, 1 once issued or void: the queue's first sort key. */
+  @Column({ name: 'urgency_group', type: 'smallint', nullable: true, insert: false, update: false, generatedType: 'STORED', asExpression: URGENCY_GROUP_SQL })
+  urgencyGroup: number | null;
   @Column({ type: 'int', default: 1 }) version: number;
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' }) createdAt: Date;
   @UpdateDateColumn({ name: 'updated_at', type: 'timestamptz' }) updatedAt: Date;

@@ -1,15 +1,12 @@
 import { Inject, Injectable, Logger } from '@nestjs/common';
-import { DataSource, EntityManager, In } from 'typeorm';
-import type { PaymentDto, PaymentsPage, SessionUser } from '@amberline/common';
+import { csvCell, DOMAIN_ERRORS, DomainError, type PaymentDto, type PaymentsPage, type SessionUser } from '@amberline/common';
 import { AuditService } from '../../audit/audit.service';
 import { AppException, fieldError } from '../../core/app-exception';
-import { Move } from '../../moves/entities/move.entity';
 import { ListPaymentsQuery, PayPermitDto, RefundPermitDto } from '../dto/permit.dto';
-import { PermitPayment } from '../entities/permit-payment.entity';
-import { Permit } from '../entities/permit.entity';
-import { toPaymentDto } from '../permit-mappers';
-import { csvCell } from '../permit-rules';
-import { STRIPE, stripeSettings, type StripeClient } from './stripe.provider';
+import type { PermitPayment } from '../entities/permit-payment.entity';
+import type { Permit } from '../entities/permit.entity';
+import { PaymentsRepository } from './payments.repository';
+import { STRIPE, STRIPE_SETTINGS, type StripeClient, type StripeSettings } from './stripe.provider';
 
 type StripeEvent = ReturnType<StripeClient['webhooks']['constructEvent']>;
 type PaymentIntentLike = { id: string; status: string; latest_charge?: string | { id: string } | null; metadata?: Record<string, string>; last_payment_error?: { code?: string; decline_code?: string; message?: string } | null };
@@ -29,15 +26,14 @@ function isCardError(e: unknown): e is { type: string; code?: string; decline_co
 export class PaymentsService {
   private readonly logger = new Logger('Payments');
   constructor(
-    private readonly ds: DataSource,
+    private readonly repo: PaymentsRepository,
     private readonly audit: AuditService,
     @Inject(STRIPE) private readonly stripe: StripeClient,
+    @Inject(STRIPE_SETTINGS) private readonly settings: StripeSettings,
   ) {}
 
-  private async dto(p: PermitPayment, manager?: EntityManager): Promise<PaymentDto> {
-    const m = manager ?? this.ds.manager;
-    const full = await m.findOneOrFail(PermitPayment, { where: { id: p.id }, relations: { permit: { move: true }, createdBy: true } });
-    return toPaymentDto(full, { moveReference: full.permit?.move?.reference ?? '', jurisdiction: full.permit?.jurisdiction ?? '', permitNumber: full.permit?.permitNumber ?? null });
+  private dto(p: PermitPayment): Promise<PaymentDto> {
+    return this.repo.dto(p.id);
   }
 
   /**
@@ -46,26 +42,25 @@ export class PaymentsService {
    */
   async pay(permitId: string, dto: PayPermitDto, actor: SessionUser, now: Date): Promise<PaymentDto> {
     // an earlier attempt left pending by a processor that did not answer is settled first (never two charges)
-    const stuck = await this.ds.manager.findOne(PermitPayment, { where: { permitId, status: 'pending' } });
+    const stuck = await this.repo.pendingOf(permitId);
     if (stuck && stuck.clientKey !== dto.idempotencyKey) await this.reconcile(stuck, actor, now);
-    const row = await this.ds.transaction(async (m) => {
-      const permit = await m.findOne(Permit, { where: { id: permitId }, lock: { mode: 'pessimistic_write' } });
-      if (!permit) throw new AppException(404, 'not_found', `No permit ${permitId}`);
-      const same = await m.findOneBy(PermitPayment, { permitId, clientKey: dto.idempotencyKey });
+    const row = await this.repo.transaction(async (m) => {
+      const permit = await this.repo.lockPermit(m, permitId);
+      if (!permit) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No permit ${permitId}`);
+      const same = await this.repo.byClientKey(m, permitId, dto.idempotencyKey);
       if (same) {
         if (same.paymentMethod !== dto.paymentMethod) throw fieldError('idempotencyKey', 'was already used for this permit with another payment method; use a new key for a new attempt', 409);
         return { payment: same, replay: true };
       }
-      if (permit.status !== 'issued') throw new AppException(409, 'conflict', `Only an issued permit's fee is paid; this permit is ${permit.status.replace('_', ' ')}`);
+      if (permit.status !== 'issued') throw new DomainError(DOMAIN_ERRORS.PERMIT_NOT_ISSUED, `Only an issued permit's fee is paid; this permit is ${permit.status.replace('_', ' ')}`);
       if (permit.actualFeeCents === null || permit.actualFeeCents <= 0) throw fieldError('actualFeeUsd', 'record the actual fee (more than $0) before paying');
-      const paid = await m.findOne(PermitPayment, { where: { permitId, status: In(['succeeded', 'processing', 'pending']) } });
-      if (paid) throw new AppException(409, 'conflict', `This permit's fee is already ${paid.status === 'succeeded' ? 'paid' : 'being paid'} (attempt ${paid.attempt})`, { paymentId: paid.id });
-      const [{ n }] = await m.query(`SELECT COALESCE(max(attempt), 0)::int + 1 AS n FROM permit_payments WHERE permit_id = $1`, [permitId]);
-      const payment = m.create(PermitPayment, {
+      const paid = await this.repo.paidOrPaying(m, permitId);
+      if (paid) throw new DomainError(DOMAIN_ERRORS.ALREADY_DONE, `This permit's fee is already ${paid.status === 'succeeded' ? 'paid' : 'being paid'} (attempt ${paid.attempt})`, { paymentId: paid.id });
+      const n = await this.repo.nextAttempt(m, permitId);
+      const saved = await this.repo.insert(m, {
         permitId, moveId: permit.moveId, attempt: n, clientKey: dto.idempotencyKey, idempotencyKey: `permit-${permitId}-attempt-${n}`,
         amountCents: permit.actualFeeCents, currency: 'usd', status: 'pending', paymentMethod: dto.paymentMethod, createdById: actor.id,
       });
-      const saved = await m.save(payment);
       await this.audit.record(m, {
         moveId: permit.moveId, entity: 'payment', entityId: saved.id, action: 'started', actorId: actor.id,
         after: { permitId, jurisdiction: permit.jurisdiction, attempt: n, amountCents: saved.amountCents, paymentMethod: dto.paymentMethod },
@@ -78,11 +73,11 @@ export class PaymentsService {
 
   /** Creates and confirms the PaymentIntent of a pending attempt (again safely: the keys make it one charge). */
   private async charge(payment: PermitPayment, actor: SessionUser, now: Date): Promise<PaymentDto> {
-    const permit = await this.ds.manager.findOneByOrFail(Permit, { id: payment.permitId });
+    const permit = await this.repo.permit(payment.permitId);
     let intent: PaymentIntentLike;
     try {
       const created = await this.createIntent(payment, permit);
-      await this.ds.manager.update(PermitPayment, { id: payment.id }, { stripePaymentIntentId: created.id });
+      await this.repo.setIntent(payment.id, created.id);
       intent = await this.stripe.paymentIntents.confirm(created.id, { payment_method: payment.paymentMethod }, { idempotencyKey: `${payment.idempotencyKey}-confirm` });
     } catch (e) {
       if (isCardError(e)) {
@@ -128,13 +123,13 @@ export class PaymentsService {
    * new attempt can start. While the processor still does not answer, 503 and the attempt stays as it is.
    */
   private async reconcile(p: PermitPayment, actor: SessionUser, now: Date): Promise<void> {
-    const permit = await this.ds.manager.findOneByOrFail(Permit, { id: p.permitId });
+    const permit = await this.repo.permit(p.permitId);
     let intent: PaymentIntentLike | null;
     try {
       if (p.stripePaymentIntentId) intent = await this.stripe.paymentIntents.retrieve(p.stripePaymentIntentId);
       else {
         intent = await this.createIntent(p, permit);
-        await this.ds.manager.update(PermitPayment, { id: p.id }, { stripePaymentIntentId: intent.id });
+        await this.repo.setIntent(p.id, intent.id);
       }
     } catch (e) {
       const err = e as { type?: string; code?: string; message?: string };
@@ -164,10 +159,10 @@ export class PaymentsService {
 
   /** Moves a payment on from one of `from` statuses (so a late or repeated event changes nothing twice). */
   private async settle(id: string, from: PermitPayment['status'][], set: Partial<PermitPayment>, actor: SessionUser | null, action: string, now: Date): Promise<boolean> {
-    return this.ds.transaction(async (m) => {
-      const p = await m.findOne(PermitPayment, { where: { id }, lock: { mode: 'pessimistic_write' } });
+    return this.repo.transaction(async (m) => {
+      const p = await this.repo.lock(m, id);
       if (!p || !from.includes(p.status)) return false;
-      await m.update(PermitPayment, { id }, { ...set, updatedAt: now });
+      await this.repo.update(m, id, { ...set, updatedAt: now });
       await this.audit.record(m, {
         moveId: p.moveId, entity: 'payment', entityId: id, action, actorId: actor?.id ?? null,
         before: { status: p.status }, after: { permitId: p.permitId, ...JSON.parse(JSON.stringify(set)) },
@@ -182,7 +177,7 @@ export class PaymentsService {
     if (!rawBody?.length) throw fieldError('body', 'the event body is missing');
     let event: StripeEvent;
     try {
-      event = this.stripe.webhooks.constructEvent(rawBody, signature, stripeSettings().webhookSecret);
+      event = this.stripe.webhooks.constructEvent(rawBody, signature, this.settings.webhookSecret);
     } catch (e) {
       throw new AppException(400, 'bad_request', `Webhook signature does not verify: ${(e as Error).message.split('\n')[0]}`);
     }
@@ -190,11 +185,11 @@ export class PaymentsService {
     const find = async (): Promise<PermitPayment | null> => {
       const byMeta = obj.metadata?.paymentId;
       if (byMeta && /^[0-9a-f-]{36}$/.test(byMeta)) {
-        const p = await this.ds.manager.findOneBy(PermitPayment, { id: byMeta });
+        const p = await this.repo.byId(byMeta);
         if (p) return p;
       }
       const pi = event.type.startsWith('payment_intent.') ? obj.id : obj.payment_intent;
-      return pi ? this.ds.manager.findOneBy(PermitPayment, { stripePaymentIntentId: pi }) : null;
+      return pi ? this.repo.byIntent(pi) : null;
     };
     let handled = false;
     switch (event.type) {
@@ -233,18 +228,18 @@ export class PaymentsService {
 
   /** Refunds the paid fee of a void permit, when the rule it was created under says fees are refundable. */
   async refund(permitId: string, dto: RefundPermitDto, actor: SessionUser, now: Date): Promise<PaymentDto> {
-    const { payment, permit } = await this.ds.transaction(async (m) => {
-      const permit = await m.findOne(Permit, { where: { id: permitId }, lock: { mode: 'pessimistic_write' } });
-      if (!permit) throw new AppException(404, 'not_found', `No permit ${permitId}`);
-      if (permit.status !== 'void') throw new AppException(409, 'conflict', 'Only a void permit\'s fee can be refunded; void the permit first');
+    const { payment, permit } = await this.repo.transaction(async (m) => {
+      const permit = await this.repo.lockPermit(m, permitId);
+      if (!permit) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No permit ${permitId}`);
+      if (permit.status !== 'void') throw new DomainError(DOMAIN_ERRORS.PRECONDITION_UNMET, 'Only a void permit\'s fee can be refunded; void the permit first');
       if (permit.refundable !== true) {
-        throw new AppException(409, 'conflict', permit.refundable === false
+        throw new DomainError(DOMAIN_ERRORS.PRECONDITION_UNMET, permit.refundable === false
           ? `${permit.jurisdiction} permit fees are not refundable under its rule (rule version ${permit.ruleVersion ?? '?'})`
           : `The ${permit.jurisdiction} rule does not say its permit fees are refundable`);
       }
-      const payment = await m.findOne(PermitPayment, { where: { permitId, status: 'succeeded' }, lock: { mode: 'pessimistic_write' } });
-      if (!payment) throw new AppException(409, 'conflict', 'Nothing was paid for this permit, so there is nothing to refund');
-      if (!payment.stripePaymentIntentId) throw new AppException(409, 'conflict', 'This payment has no processor reference to refund');
+      const payment = await this.repo.lockSucceeded(m, permitId);
+      if (!payment) throw new DomainError(DOMAIN_ERRORS.PRECONDITION_UNMET, 'Nothing was paid for this permit, so there is nothing to refund');
+      if (!payment.stripePaymentIntentId) throw new DomainError(DOMAIN_ERRORS.PRECONDITION_UNMET, 'This payment has no processor reference to refund');
       return { payment, permit };
     });
     let refund: { id: string; status: string | null };
@@ -255,12 +250,12 @@ export class PaymentsService {
       );
     } catch (e) {
       const err = e as { type?: string; message?: string };
-      if (err.type === 'StripeInvalidRequestError') throw new AppException(409, 'conflict', `The payment service refused the refund: ${err.message}`);
+      if (err.type === 'StripeInvalidRequestError') throw new DomainError(DOMAIN_ERRORS.PROCESSOR_REFUSED, `The payment service refused the refund: ${err.message}`);
       throw new AppException(503, 'service_unavailable', 'The payment service did not answer; try the refund again');
     }
-    if (refund.status !== 'succeeded' && refund.status !== 'pending') throw new AppException(409, 'conflict', `The refund ended as ${refund.status}`);
-    await this.ds.transaction(async (m) => {
-      await m.update(PermitPayment, { id: payment.id, status: 'succeeded' }, { status: 'refunded', stripeRefundId: refund.id, refundedAt: now, updatedAt: now });
+    if (refund.status !== 'succeeded' && refund.status !== 'pending') throw new DomainError(DOMAIN_ERRORS.PROCESSOR_REFUSED, `The refund ended as ${refund.status}`);
+    await this.repo.transaction(async (m) => {
+      await this.repo.markRefunded(m, payment.id, refund.id, now);
       await this.audit.record(m, {
         moveId: permit.moveId, entity: 'payment', entityId: payment.id, action: 'refunded', actorId: actor.id,
         before: { status: 'succeeded' }, after: { permitId, jurisdiction: permit.jurisdiction, stripeRefundId: refund.id, amountCents: payment.amountCents }, reason: dto.reason,
@@ -269,42 +264,18 @@ export class PaymentsService {
     return this.dto(payment);
   }
 
-  private ledgerQuery(q: Pick<ListPaymentsQuery, 'moveId' | 'status' | 'jurisdiction'>) {
-    const qb = this.ds.manager
-      .createQueryBuilder(PermitPayment, 'x')
-      .innerJoinAndSelect('x.permit', 'p')
-      .innerJoinAndSelect('p.move', 'm')
-      .leftJoinAndSelect('x.createdBy', 'u');
-    if (q.moveId) qb.andWhere('x.move_id = :moveId', { moveId: q.moveId });
-    if (q.status) qb.andWhere('x.status = :status', { status: q.status });
-    if (q.jurisdiction) qb.andWhere('p.jurisdiction = :j', { j: q.jurisdiction });
-    return qb.orderBy('x.created_at', 'DESC').addOrderBy('x.id', 'ASC');
-  }
-
-  private toDto = (x: PermitPayment): PaymentDto =>
-    toPaymentDto(x, { moveReference: x.permit?.move?.reference ?? '', jurisdiction: x.permit?.jurisdiction ?? '', permitNumber: x.permit?.permitNumber ?? null });
-
   /** The ledger: every attempt, newest first, per move or overall, with the paid and refunded totals. */
   async ledger(q: ListPaymentsQuery, viewer: SessionUser): Promise<PaymentsPage> {
     if (q.moveId && viewer.role === 'driver') throw new AppException(403, 'forbidden', 'Your role may not do this');
-    if (q.moveId && !(await this.ds.manager.existsBy(Move, { id: q.moveId }))) throw new AppException(404, 'not_found', `No move ${q.moveId}`);
-    const [rows, total] = await this.ledgerQuery(q).skip((q.page - 1) * q.pageSize).take(q.pageSize).getManyAndCount();
-    const params: unknown[] = [];
-    const where: string[] = [];
-    if (q.moveId) where.push(`x.move_id = $${params.push(q.moveId)}`);
-    if (q.jurisdiction) where.push(`p.jurisdiction = $${params.push(q.jurisdiction)}`);
-    const [t] = await this.ds.query(
-      `SELECT COALESCE(sum(x.amount_cents) FILTER (WHERE x.status = 'succeeded'), 0)::bigint AS paid,
-              COALESCE(sum(x.amount_cents) FILTER (WHERE x.status = 'refunded'), 0)::bigint AS refunded
-         FROM permit_payments x JOIN permits p ON p.id = x.permit_id ${where.length ? `WHERE ${where.join(' AND ')}` : ''}`,
-      params,
-    );
-    return { items: rows.map(this.toDto), total, page: q.page, pageSize: q.pageSize, totals: { succeededUsd: Number(t.paid) / 100, refundedUsd: Number(t.refunded) / 100 } };
+    if (q.moveId && !(await this.repo.moveExists(q.moveId))) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No move ${q.moveId}`);
+    const { items, total } = await this.repo.ledgerPage(q, q.page, q.pageSize);
+    const t = await this.repo.totals(q);
+    return { items, total, page: q.page, pageSize: q.pageSize, totals: { succeededUsd: t.paidCents / 100, refundedUsd: t.refundedCents / 100 } };
   }
 
   /** The ledger as CSV (at most 10,000 rows), one line per attempt. */
   async ledgerCsv(q: ListPaymentsQuery): Promise<string> {
-    const rows = (await this.ledgerQuery(q).take(10_000).getMany()).map(this.toDto);
+    const rows = await this.repo.ledgerLines(q, 10_000);
     const head = ['date', 'move', 'jurisdiction', 'permit_number', 'attempt', 'amount_usd', 'currency', 'status', 'payment_method', 'payment_intent', 'charge', 'refund', 'decline_code', 'paid_at', 'refunded_at'];
     const lines = rows.map((r) =>
       [r.createdAt, r.moveReference, r.jurisdiction, r.permitNumber, r.attempt, r.amountUsd.toFixed(2), r.currency, r.status, r.paymentMethod,
