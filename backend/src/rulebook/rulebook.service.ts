@@ -1,16 +1,13 @@
 import { Injectable, Logger, OnApplicationBootstrap } from '@nestjs/common';
-import { InjectRepository } from '@nestjs/typeorm';
 import { LRUCache } from 'lru-cache';
-import { DataSource, Repository } from 'typeorm';
 import {
-  assessJurisdiction, blankRecord, factsOf, isFactRecord, rulebookCoverage, validateJurisdictionRule, JURISDICTIONS, jurisdictionByCode, RULEBOOK_DATA,
+  assessJurisdiction, blankRecord, DOMAIN_ERRORS, DomainError, factsOf, isFactRecord, rulebookCoverage, validateJurisdictionRule, JURISDICTIONS, jurisdictionByCode, RULEBOOK_DATA,
   type JurisdictionRule, type JurisdictionSummaryDto, type RuleVersionDto, type RulebookCoverage, type SessionUser,
 } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
-import { preparedQuery } from '../database/prepared';
-import { AppException, fieldError } from '../core/app-exception';
-import { Jurisdiction } from './entities/jurisdiction.entity';
-import { RuleVersion } from './entities/rule-version.entity';
+import { fieldError } from '../core/app-exception';
+import type { RuleVersion } from './entities/rule-version.entity';
+import { RulebookRepository } from './rulebook.repository';
 
 /** The starting record of a jurisdiction: its data file (`common/src/rulebook/data`), else every topic not on file. */
 export function initialRecord(code: string, name: string): JurisdictionRule {
@@ -57,34 +54,29 @@ export class RulebookService implements OnApplicationBootstrap {
   private readonly records = new LRUCache<string, JurisdictionRule>({ max: 200 });
 
   constructor(
-    private readonly ds: DataSource,
+    private readonly repo: RulebookRepository,
     private readonly audit: AuditService,
-    @InjectRepository(Jurisdiction) private readonly jurisdictions: Repository<Jurisdiction>,
-    @InjectRepository(RuleVersion) private readonly versions: Repository<RuleVersion>,
   ) {}
 
   /** Every jurisdiction gets a first version on first start; safe when several servers start at once. */
   async onApplicationBootstrap(): Promise<void> {
-    await this.ds.transaction(async (m) => {
-      await m.query(`SELECT pg_advisory_xact_lock(hashtext('amberline.rulebook.bootstrap'))`);
-      const have = new Set((await m.find(Jurisdiction)).map((j) => j.code));
+    await this.repo.transaction(async (m) => {
+      await this.repo.lockBootstrap(m);
+      const have = new Set(await this.repo.codes(m));
       const missing = JURISDICTIONS.filter((j) => !have.has(j.code));
       for (const j of missing) {
         const record = initialRecord(j.code, j.name);
-        await m.insert(Jurisdiction, { code: j.code, name: j.name, currentVersion: 1 });
-        await m.insert(RuleVersion, { code: j.code, version: 1, record, sample: nothingOnFile(record), asOf: record.asOf, note: 'initial record (rulebook data file)', createdById: null });
+        await this.repo.insertJurisdiction(m, { code: j.code, name: j.name, currentVersion: 1 });
+        await this.repo.insertVersion(m, { code: j.code, version: 1, record, sample: nothingOnFile(record), asOf: record.asOf, note: 'initial record (rulebook data file)', createdById: null });
       }
       if (missing.length) this.logger.log(`rulebook: added ${missing.length} jurisdictions`);
       // a database started before records were facts: its current records get the data files as a new version
-      const stale: { code: string; current_version: number }[] = await m.query(
-        `SELECT j.code, j.current_version FROM jurisdictions j JOIN rule_versions v ON v.code = j.code AND v.version = j.current_version
-          WHERE NOT (v.record ? 'schema') OR v.record->>'schema' <> '2'`,
-      );
+      const stale = await this.repo.staleCurrent(m);
       for (const s of stale) {
         const record = initialRecord(s.code, jurisdictionByCode(s.code)?.name ?? s.code);
         const version = s.current_version + 1;
-        await m.insert(RuleVersion, { code: s.code, version, record, sample: nothingOnFile(record), asOf: record.asOf, note: 'sourced rulebook: every value with its own source, not on file where none was read', createdById: null });
-        await m.update(Jurisdiction, { code: s.code }, { currentVersion: version });
+        await this.repo.insertVersion(m, { code: s.code, version, record, sample: nothingOnFile(record), asOf: record.asOf, note: 'sourced rulebook: every value with its own source, not on file where none was read', createdById: null });
+        await this.repo.setCurrentVersion(m, s.code, version);
       }
       if (stale.length) this.logger.log(`rulebook: ${stale.length} records moved to the sourced rulebook`);
     });
@@ -98,23 +90,20 @@ export class RulebookService implements OnApplicationBootstrap {
   }
 
   async list(): Promise<JurisdictionSummaryDto[]> {
-    const rows: { code: string; name: string; version: number; sample: boolean; as_of: string; created_at: Date }[] = await this.ds.query(
-      `SELECT j.code, j.name, v.version, v.sample, to_char(v.as_of, 'YYYY-MM-DD') AS as_of, v.created_at
-         FROM jurisdictions j JOIN rule_versions v ON v.code = j.code AND v.version = j.current_version ORDER BY j.name`,
-    );
+    const rows = await this.repo.summaries();
     return rows.map((r) => ({ code: r.code, name: r.name, version: r.version, sample: r.sample, asOf: r.as_of, updatedAt: new Date(r.created_at).toISOString() }));
   }
 
   async current(code: string): Promise<RuleVersionDto> {
-    const j = await this.jurisdictions.findOneBy({ code: code.toUpperCase() });
-    if (!j) throw new AppException(404, 'not_found', `No jurisdiction ${code}`);
-    const v = await this.versions.findOne({ where: { code: j.code, version: j.currentVersion }, relations: { createdBy: true } });
+    const j = await this.repo.jurisdiction(code.toUpperCase());
+    if (!j) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No jurisdiction ${code}`);
+    const v = await this.repo.version(j.code, j.currentVersion);
     return toVersionDto(v!);
   }
 
   async history(code: string): Promise<RuleVersionDto[]> {
-    const rows = await this.versions.find({ where: { code: code.toUpperCase() }, relations: { createdBy: true }, order: { version: 'DESC' } });
-    if (!rows.length) throw new AppException(404, 'not_found', `No jurisdiction ${code}`);
+    const rows = await this.repo.history(code.toUpperCase());
+    if (!rows.length) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No jurisdiction ${code}`);
     return rows.map(toVersionDto);
   }
 
@@ -125,13 +114,7 @@ export class RulebookService implements OnApplicationBootstrap {
    */
   async currentRules(codes: string[]): Promise<Map<string, { id: string; record: JurisdictionRule; version: number }>> {
     if (!codes.length) return new Map();
-    const rows = await preparedQuery<{ id: string; code: string; version: number; record: JurisdictionRule | null }>(
-      this.ds,
-      `SELECT v.id, v.code, v.version, CASE WHEN v.id = ANY($2::uuid[]) THEN NULL ELSE v.record END AS record
-         FROM jurisdictions j JOIN rule_versions v ON v.code = j.code AND v.version = j.current_version
-        WHERE j.code = ANY($1) ORDER BY v.code`,
-      [codes, [...this.records.keys()]],
-    );
+    const rows = await this.repo.currentRules(codes, [...this.records.keys()]);
     const out = new Map<string, { id: string; record: JurisdictionRule; version: number }>();
     for (const r of rows) {
       // a record evicted between the key list and this line is simply read again next time
@@ -150,11 +133,7 @@ export class RulebookService implements OnApplicationBootstrap {
     const current = await this.currentRules(codes);
     const wanted = Object.entries(pinned ?? {}).filter(([code, v]) => codes.includes(code) && current.get(code)?.version !== v);
     if (!wanted.length) return current;
-    const rows = await preparedQuery<{ id: string; code: string; version: number }>(
-      this.ds,
-      `SELECT v.id, v.code, v.version FROM rule_versions v JOIN unnest($1::varchar[], $2::int[]) w(code, version) ON v.code = w.code AND v.version = w.version`,
-      [wanted.map(([c]) => c), wanted.map(([, v]) => v)],
-    );
+    const rows = await this.repo.versionIds(wanted);
     for (const r of rows) {
       const record = this.records.get(r.id) ?? (await this.recordById(r.id));
       this.records.set(r.id, record);
@@ -165,29 +144,28 @@ export class RulebookService implements OnApplicationBootstrap {
 
   /** The current version number of each code. */
   async currentVersions(codes: string[]): Promise<Record<string, number>> {
-    const rows: { code: string; current_version: number }[] = await this.ds.query(`SELECT code, current_version FROM jurisdictions WHERE code = ANY($1)`, [codes]);
+    const rows = await this.repo.currentVersions(codes);
     return Object.fromEntries(rows.map((r) => [r.code, r.current_version]));
   }
 
-  private async recordById(id: string): Promise<JurisdictionRule> {
-    const [row] = await this.ds.query(`SELECT record FROM rule_versions WHERE id = $1`, [id]);
-    return row.record;
+  private recordById(id: string): Promise<JurisdictionRule> {
+    return this.repo.recordById(id);
   }
 
   async update(codeRaw: string, record: JurisdictionRule, note: string, actor: SessionUser): Promise<RuleVersionDto> {
     const code = codeRaw.toUpperCase();
-    if (!jurisdictionByCode(code)) throw new AppException(404, 'not_found', `No jurisdiction ${code}`);
+    if (!jurisdictionByCode(code)) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No jurisdiction ${code}`);
     checkRuleRecord(code, record);
-    const id = await this.ds.transaction(async (m) => {
-      const j = await m.findOne(Jurisdiction, { where: { code }, lock: { mode: 'pessimistic_write' } });
-      if (!j) throw new AppException(404, 'not_found', `No jurisdiction ${code}`);
+    const id = await this.repo.transaction(async (m) => {
+      const j = await this.repo.lockJurisdiction(m, code);
+      if (!j) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No jurisdiction ${code}`);
       const version = j.currentVersion + 1;
-      const inserted = await m.insert(RuleVersion, { code, version, record, sample: nothingOnFile(record), asOf: record.asOf, note, createdById: actor.id });
-      await m.update(Jurisdiction, { code }, { currentVersion: version });
+      const inserted = await this.repo.insertVersion(m, { code, version, record, sample: nothingOnFile(record), asOf: record.asOf, note, createdById: actor.id });
+      await this.repo.setCurrentVersion(m, code, version);
       await this.audit.record(m, { entity: 'rule', entityId: code, action: 'new_version', actorId: actor.id, before: { version: j.currentVersion }, after: { version }, reason: note });
-      return inserted.identifiers[0].id as string;
+      return inserted;
     });
-    const v = await this.versions.findOne({ where: { id }, relations: { createdBy: true } });
+    const v = await this.repo.versionById(id);
     return toVersionDto(v!);
   }
 }
