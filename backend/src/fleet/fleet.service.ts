@@ -1,19 +1,13 @@
 import { Injectable } from '@nestjs/common';
-import { InjectRepository } from '@nestjs/typeorm';
-import { DataSource, Repository } from 'typeorm';
-import type { SessionUser, TractorDto, TrailerDto } from '@amberline/common';
+import { DOMAIN_ERRORS, DomainError, type SessionUser, type TractorDto, type TrailerDto } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
-import { AppException, fieldError } from '../core/app-exception';
+import { fieldError } from '../core/app-exception';
 import { Tractor } from './entities/tractor.entity';
 import { Trailer } from './entities/trailer.entity';
 import { TractorInputDto, TrailerInputDto } from './dto/fleet.dto';
+import { FleetRepository, toTractorDto, toTrailerDto } from './fleet.repository';
 
-export const toTractorDto = (t: Tractor): TractorDto => ({
-  id: t.id, unitNumber: t.unitNumber, plate: t.plate, ...t.spec, active: t.active, version: t.version, updatedAt: t.updatedAt.toISOString(),
-});
-export const toTrailerDto = (t: Trailer): TrailerDto => ({
-  id: t.id, unitNumber: t.unitNumber, type: t.type, ...t.spec, active: t.active, version: t.version, updatedAt: t.updatedAt.toISOString(),
-});
+export { toTractorDto, toTrailerDto };
 
 function checkTrailerGeometry(dto: TrailerInputDto): void {
   dto.decks.forEach((d, i) => {
@@ -34,38 +28,36 @@ function checkTrailerGeometry(dto: TrailerInputDto): void {
 @Injectable()
 export class FleetService {
   constructor(
-    private readonly ds: DataSource,
+    private readonly repo: FleetRepository,
     private readonly audit: AuditService,
-    @InjectRepository(Tractor) private readonly tractors: Repository<Tractor>,
-    @InjectRepository(Trailer) private readonly trailers: Repository<Trailer>,
   ) {}
 
   async listTractors(): Promise<TractorDto[]> {
-    return (await this.tractors.find({ order: { unitNumber: 'ASC' } })).map(toTractorDto);
+    return (await this.repo.tractors()).map(toTractorDto);
   }
   async listTrailers(): Promise<TrailerDto[]> {
-    return (await this.trailers.find({ order: { unitNumber: 'ASC' } })).map(toTrailerDto);
+    return (await this.repo.trailers()).map(toTrailerDto);
   }
   async tractor(id: string): Promise<Tractor> {
-    const t = await this.tractors.findOneBy({ id });
-    if (!t) throw new AppException(404, 'not_found', `No tractor ${id}`);
+    const t = await this.repo.tractor(id);
+    if (!t) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No tractor ${id}`);
     return t;
   }
   async trailer(id: string): Promise<Trailer> {
-    const t = await this.trailers.findOneBy({ id });
-    if (!t) throw new AppException(404, 'not_found', `No trailer ${id}`);
+    const t = await this.repo.trailer(id);
+    if (!t) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No trailer ${id}`);
     return t;
   }
 
   async saveTractor(dto: TractorInputDto, actor: SessionUser, id?: string, version?: number): Promise<TractorDto> {
     const { unitNumber, plate, ...spec } = dto;
-    return this.ds.transaction(async (m) => {
-      const before = id ? await m.findOne(Tractor, { where: { id }, lock: { mode: 'pessimistic_write' } }) : null;
-      if (id && !before) throw new AppException(404, 'not_found', `No tractor ${id}`);
-      if (before && version !== undefined && before.version !== version) throw new AppException(409, 'conflict', 'This tractor was changed by someone else; reload it');
-      const dup = await m.findOneBy(Tractor, { unitNumber });
+    return this.repo.transaction(async (m) => {
+      const before = id ? await this.repo.lock(m, Tractor, id) : null;
+      if (id && !before) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No tractor ${id}`);
+      if (before && version !== undefined && before.version !== version) throw new DomainError(DOMAIN_ERRORS.VERSION_CONFLICT, 'This tractor was changed by someone else; reload it');
+      const dup = await this.repo.byUnitNumber(m, Tractor, unitNumber);
       if (dup && dup.id !== id) throw fieldError('unitNumber', 'already used by another tractor', 409);
-      const saved = await m.save(Tractor, { ...(before ?? {}), unitNumber, plate, spec } as Tractor);
+      const saved = await this.repo.save(m, Tractor, { ...(before ?? {}), unitNumber, plate, spec } as Tractor);
       await this.audit.record(m, { entity: 'tractor', entityId: saved.id, action: id ? 'updated' : 'created', actorId: actor.id, before: before ? toTractorDto(before) : null, after: toTractorDto(saved) });
       return toTractorDto(saved);
     });
@@ -74,13 +66,13 @@ export class FleetService {
   async saveTrailer(dto: TrailerInputDto, actor: SessionUser, id?: string, version?: number): Promise<TrailerDto> {
     checkTrailerGeometry(dto);
     const { unitNumber, type, ...spec } = dto;
-    return this.ds.transaction(async (m) => {
-      const before = id ? await m.findOne(Trailer, { where: { id }, lock: { mode: 'pessimistic_write' } }) : null;
-      if (id && !before) throw new AppException(404, 'not_found', `No trailer ${id}`);
-      if (before && version !== undefined && before.version !== version) throw new AppException(409, 'conflict', 'This trailer was changed by someone else; reload it');
-      const dup = await m.findOneBy(Trailer, { unitNumber });
+    return this.repo.transaction(async (m) => {
+      const before = id ? await this.repo.lock(m, Trailer, id) : null;
+      if (id && !before) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No trailer ${id}`);
+      if (before && version !== undefined && before.version !== version) throw new DomainError(DOMAIN_ERRORS.VERSION_CONFLICT, 'This trailer was changed by someone else; reload it');
+      const dup = await this.repo.byUnitNumber(m, Trailer, unitNumber);
       if (dup && dup.id !== id) throw fieldError('unitNumber', 'already used by another trailer', 409);
-      const saved = await m.save(Trailer, { ...(before ?? {}), unitNumber, type, spec: JSON.parse(JSON.stringify(spec)) } as Trailer);
+      const saved = await this.repo.save(m, Trailer, { ...(before ?? {}), unitNumber, type, spec: JSON.parse(JSON.stringify(spec)) } as Trailer);
       await this.audit.record(m, { entity: 'trailer', entityId: saved.id, action: id ? 'updated' : 'created', actorId: actor.id, before: before ? toTrailerDto(before) : null, after: toTrailerDto(saved) });
       return toTrailerDto(saved);
     });
