@@ -3,12 +3,13 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import { AuditModule } from '../audit/audit.module';
 import { Vendor } from './entities/vendor.entity';
 import { VendorsController } from './vendors.controller';
+import { VendorsRepository } from './vendors.repository';
 import { VendorsService } from './vendors.service';
 
 @Module({
   imports: [TypeOrmModule.forFeature([Vendor]), AuditModule],
   controllers: [VendorsController],
-  providers: [VendorsService],
-  exports: [VendorsService],
+  providers: [VendorsRepository, VendorsService],
+  exports: [VendorsService, VendorsRepository],
 })
 export class VendorsModule {}

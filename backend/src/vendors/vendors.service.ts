@@ -1,11 +1,11 @@
 import { Injectable } from '@nestjs/common';
-import { InjectRepository } from '@nestjs/typeorm';
-import { DataSource, EntityManager, Repository } from 'typeorm';
-import { vendorWarnings, type SessionUser, type VendorDto } from '@amberline/common';
+import type { EntityManager } from 'typeorm';
+import { DOMAIN_ERRORS, DomainError, vendorWarnings, type SessionUser, type VendorDto } from '@amberline/common';
 import { AuditService, diff } from '../audit/audit.service';
-import { AppException, fieldError } from '../core/app-exception';
+import { fieldError } from '../core/app-exception';
 import { UpdateVendorDto, VendorInputDto, VendorsQueryDto } from './dto/vendor.dto';
-import { Vendor } from './entities/vendor.entity';
+import type { Vendor } from './entities/vendor.entity';
+import { VendorsRepository } from './vendors.repository';
 
 const today = (now: Date) => now.toISOString().slice(0, 10);
 /** A `YYYY-MM-DD` that names a day of the calendar (not 2027-02-30). */
@@ -55,33 +55,26 @@ function checkInput(dto: VendorInputDto): void {
 @Injectable()
 export class VendorsService {
   constructor(
-    private readonly ds: DataSource,
+    private readonly repo: VendorsRepository,
     private readonly audit: AuditService,
-    @InjectRepository(Vendor) private readonly vendors: Repository<Vendor>,
   ) {}
 
   async list(q: VendorsQueryDto, now: Date): Promise<VendorDto[]> {
-    const qb = this.vendors.createQueryBuilder('v');
-    if (!q.includeInactive) qb.andWhere('v.active = true');
-    if (q.state) qb.andWhere(':s = ANY(v.states)', { s: q.state });
-    if (q.search?.trim()) {
-      qb.andWhere(`(v.company || ' ' || v.contact_name || ' ' || v.email) ILIKE :q`, { q: `%${q.search.trim().replace(/[%_\\]/g, '\\$&')}%` });
-    }
-    const rows = await qb.orderBy('v.company', 'ASC').addOrderBy('v.id', 'ASC').take(500).getMany();
-    return rows.map((v) => toVendorDto(v, now));
+    return (await this.repo.list(q)).map((v) => toVendorDto(v, now));
   }
 
   async get(id: string, manager?: EntityManager): Promise<Vendor> {
-    const v = await (manager ?? this.ds.manager).findOneBy(Vendor, { id });
-    if (!v) throw new AppException(404, 'not_found', `No vendor ${id}`);
+    const v = await this.repo.find(id, manager);
+    if (!v) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No vendor ${id}`);
     return v;
   }
 
   async create(dto: VendorInputDto, actor: SessionUser, now: Date): Promise<VendorDto> {
     checkInput(dto);
-    const saved = await this.ds.transaction(async (m) => {
-      const v = await m.save(
-        m.create(Vendor, {
+    const saved = await this.repo.transaction(async (m) => {
+      const v = await this.repo.save(
+        m,
+        this.repo.build({
           company: dto.company, contactName: dto.contactName, email: dto.email, phone: dto.phone, states: dto.states, operators: dto.operators,
           insurance: dto.insurance, vehicles: dto.vehicles, rates: dto.rates, notes: dto.notes?.trim() || null, active: dto.active ?? true,
         }),
@@ -94,13 +87,13 @@ export class VendorsService {
 
   async update(id: string, dto: UpdateVendorDto, actor: SessionUser, now: Date): Promise<VendorDto> {
     checkInput(dto);
-    const saved = await this.ds.transaction(async (m) => {
-      const before = await m.findOne(Vendor, { where: { id }, lock: { mode: 'pessimistic_write' } });
-      if (!before) throw new AppException(404, 'not_found', `No vendor ${id}`);
+    const saved = await this.repo.transaction(async (m) => {
+      const before = await this.repo.lock(m, id);
+      if (!before) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No vendor ${id}`);
       if (before.version !== dto.version) {
-        throw new AppException(409, 'conflict', `This vendor was changed by someone else (version ${before.version}, yours ${dto.version}); reload it`, { currentVersion: before.version });
+        throw new DomainError(DOMAIN_ERRORS.VERSION_CONFLICT, `This vendor was changed by someone else (version ${before.version}, yours ${dto.version}); reload it`, { currentVersion: before.version });
       }
-      const after = m.create(Vendor, {
+      const after = this.repo.build({
         ...before,
         company: dto.company, contactName: dto.contactName, email: dto.email, phone: dto.phone, states: dto.states, operators: dto.operators,
         insurance: dto.insurance, vehicles: dto.vehicles, rates: dto.rates, notes: dto.notes?.trim() || null, active: dto.active ?? before.active,
@@ -108,7 +101,7 @@ export class VendorsService {
       const d = diff(auditView(before), auditView(after));
       if (!Object.keys(d.after).length) return before;
       after.version = before.version + 1;
-      const v = await m.save(after);
+      const v = await this.repo.save(m, after);
       await this.audit.record(m, { entity: 'vendor', entityId: id, action: 'updated', actorId: actor.id, before: d.before, after: d.after });
       return v;
     });
