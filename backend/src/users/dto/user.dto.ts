@@ -1,4 +1,4 @@
-import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional, PartialType, PickType } from '@nestjs/swagger';
 import { IsBoolean, IsEmail, IsIn, IsOptional, IsString, Length, MaxLength } from 'class-validator';
 import { LIMITS, ROLES, type CreateUserRequest, type Role, type UpdateUserRequest, type UserDto } from '@amberline/common';
 import { PageQuery } from '../../core/page-query.dto';
@@ -19,16 +19,18 @@ export class CreateUserDto implements CreateUserRequest {
   password: string;
 }
 
-export class UpdateUserDto implements UpdateUserRequest {
-  @ApiPropertyOptional() @Omittable() @IsString() @Length(1, LIMITS.nameMax)
-  name?: string;
+/** The fields of a change, from the create request: each may be left out (kept as it is) but not set to null. */
+const CHANGEABLE = ['name', 'role'] as const;
 
-  @ApiPropertyOptional({ enum: ROLES }) @Omittable() @IsIn(ROLES as unknown as string[], { message: `role must be one of ${ROLES.join(', ')}` })
-  role?: Role;
-
+export class UpdateUserDto
+  extends PartialType(PickType(CreateUserDto, CHANGEABLE), { skipNullProperties: false })
+  implements UpdateUserRequest
+{
   @ApiPropertyOptional() @Omittable() @IsBoolean()
   active?: boolean;
 }
+// null is refused on the fields taken from the create request, as on `active` (see Omittable)
+for (const field of CHANGEABLE) Omittable()(UpdateUserDto.prototype, field);
 
 export class ListUsersQuery extends PageQuery {
   @IsOptional() @IsIn(ROLES as unknown as string[])
