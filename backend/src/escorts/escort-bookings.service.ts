@@ -1,27 +1,25 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { DataSource, EntityManager, In } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import {
-  bookingWarnings, ESCORT_CERTIFICATION_STATES, escortCoverage, jurisdictionByCode, localDate, PLANNING_CAUTION, requiredEscortSlots, RULEBOOK_CAUTION, slotLabel,
-  type AssessmentDto, type EscortBookingDto, type MoveEscortsDto, type SessionUser, type SlotCoverage,
+  bookingWarnings, DOMAIN_ERRORS, DomainError, ESCORT_CERTIFICATION_STATES, escortCoverage, jurisdictionByCode, localDate, PLANNING_CAUTION, requiredEscortSlots,
+  RULEBOOK_CAUTION, slotLabel, travelDates,
+  type AssessmentDto, type BookingStatus, type EscortBookingDto, type MoveEscortsDto, type SessionUser, type SlotCoverage,
 } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
-import { AppException, fieldError } from '../core/app-exception';
+import { fieldError } from '../core/app-exception';
 import { MailService } from '../mail/mail.service';
 import { MAIL_SETTINGS, type MailSettings } from '../mail/mail.settings';
-import { travelDates } from '../moves/assessment.service';
-import { Move } from '../moves/entities/move.entity';
+import type { Move } from '../moves/entities/move.entity';
 import { MovesService } from '../moves/moves.service';
-import { User } from '../users/entities/user.entity';
-import { Vendor } from '../vendors/entities/vendor.entity';
 import { VendorsService } from '../vendors/vendors.service';
 import { CancelEscortBookingDto, CreateEscortBookingDto } from './dto/escorts.dto';
-import { EscortBooking, type RequestSummary } from './entities/escort-booking.entity';
-import { EscortResponseToken } from './entities/escort-response-token.entity';
+import type { EscortBooking, RequestSummary } from './entities/escort-booking.entity';
 import { cancellationMail, requestMail } from './escort-mails';
 import { hashToken, linkExpiry, newToken } from './escort-tokens';
+import { EscortsRepository } from './escorts.repository';
 
 /** Bookings that still hold (or may come to hold) their position. */
-export const ACTIVE_STATUSES = ['requested', 'proposed', 'confirmed'] as const;
+export const ACTIVE_STATUSES = ['requested', 'proposed', 'confirmed'] as const satisfies readonly BookingStatus[];
 const CLOSED_STAGES = ['running', 'delivered', 'cancelled'];
 
 export function toBookingDto(b: EscortBooking, linkExpiresAt: Date | null): EscortBookingDto {
@@ -51,32 +49,12 @@ export function toBookingDto(b: EscortBooking, linkExpiresAt: Date | null): Esco
 }
 
 /** The first segment's zone: dates of the run are read there. */
-export const moveTimeZone = (m: Move): string => m.route[0]?.timeZone ?? jurisdictionByCode(m.jurisdictions[0] ?? '')?.timeZone ?? 'America/Chicago';
-
-/** Required positions of a move (from its assessment) against its bookings. */
-export async function coverageOf(manager: EntityManager, move: Move, assessment: AssessmentDto): Promise<SlotCoverage[]> {
-  const slots = requiredEscortSlots(assessment.result.jurisdictions);
-  if (!slots.length) return [];
-  const bookings = await manager.find(EscortBooking, { where: { moveId: move.id, status: In([...ACTIVE_STATUSES]) }, relations: { vendor: true } });
-  return escortCoverage(
-    slots,
-    bookings.map((b) => ({ ...b, vendor: b.vendor?.company ?? '' })),
-    travelDates(move.requestedDeparture, move.travelDays),
-  );
-}
-
-/** Issues a link for a booking; returns the token (for the e-mail only) and its expiry. */
-export async function issueLink(manager: EntityManager, booking: EscortBooking, move: Move, now: Date): Promise<{ token: string; expiresAt: Date }> {
-  const token = newToken();
-  const expiresAt = linkExpiry(now, move.requestedDeparture, moveTimeZone(move));
-  await manager.insert(EscortResponseToken, { bookingId: booking.id, tokenHash: hashToken(token), expiresAt });
-  return { token, expiresAt };
-}
+export const moveTimeZone = (m: Pick<Move, 'route' | 'jurisdictions'>): string => m.route[0]?.timeZone ?? jurisdictionByCode(m.jurisdictions[0] ?? '')?.timeZone ?? 'America/Chicago';
 
 @Injectable()
 export class EscortBookingsService {
   constructor(
-    private readonly ds: DataSource,
+    private readonly repo: EscortsRepository,
     private readonly moves: MovesService,
     private readonly vendors: VendorsService,
     private readonly audit: AuditService,
@@ -88,16 +66,32 @@ export class EscortBookingsService {
     return `${this.mailSettings.appUrl}/escort-response/${token}`;
   }
 
+  /** Required positions of a move (from its assessment) against its bookings. */
+  async coverage(manager: EntityManager, move: Move, assessment: AssessmentDto): Promise<SlotCoverage[]> {
+    const slots = requiredEscortSlots(assessment.result.jurisdictions);
+    if (!slots.length) return [];
+    const bookings = await this.repo.withStatus(manager, move.id, ACTIVE_STATUSES);
+    return escortCoverage(
+      slots,
+      bookings.map((b) => ({ ...b, vendor: b.vendor?.company ?? '' })),
+      travelDates(move.requestedDeparture, move.travelDays),
+    );
+  }
+
+  /** Issues a link for a booking; returns the token (for the e-mail only) and its expiry. */
+  async issueLink(manager: EntityManager, booking: Pick<EscortBooking, 'id'>, move: Pick<Move, 'requestedDeparture' | 'route' | 'jurisdictions'>, now: Date): Promise<{ token: string; expiresAt: Date }> {
+    const token = newToken();
+    const expiresAt = linkExpiry(now, move.requestedDeparture, moveTimeZone(move));
+    await this.repo.insertLink(manager, booking.id, hashToken(token), expiresAt);
+    return { token, expiresAt };
+  }
+
   async forMove(moveId: string, viewer: SessionUser, now: Date): Promise<MoveEscortsDto> {
     const move = await this.moves.get(moveId, viewer);
     const assessment = await this.moves.assessmentOf(move, now);
-    const coverage = await coverageOf(this.ds.manager, move, assessment);
-    const bookings = await this.ds.manager.find(EscortBooking, {
-      where: { moveId },
-      relations: { vendor: true, requestedBy: true },
-      order: { requestedAt: 'DESC', id: 'ASC' },
-    });
-    const expiries = await this.linkExpiries(bookings.filter((b) => b.status === 'requested').map((b) => b.id));
+    const coverage = await this.coverage(this.repo.manager, move, assessment);
+    const bookings = await this.repo.forMove(moveId);
+    const expiries = await this.repo.linkExpiries(bookings.filter((b) => b.status === 'requested').map((b) => b.id));
     return {
       moveId: move.id,
       reference: move.reference,
@@ -120,26 +114,15 @@ export class EscortBookingsService {
     };
   }
 
-  private async linkExpiries(ids: string[]): Promise<Map<string, Date>> {
-    if (!ids.length) return new Map();
-    const rows: { booking_id: string; e: Date }[] = await this.ds.query(
-      `SELECT booking_id, max(expires_at) AS e FROM escort_response_tokens WHERE booking_id = ANY($1) AND used_at IS NULL GROUP BY booking_id`,
-      [ids],
-    );
-    return new Map(rows.map((r) => [r.booking_id, new Date(r.e)]));
-  }
-
   /** Asks a vendor for one required position on some of the move's jurisdictions; the request e-mail goes to the outbox in the same transaction. */
   async request(moveId: string, dto: CreateEscortBookingDto, actor: SessionUser, now: Date): Promise<EscortBookingDto> {
-    const { bookingId, expiresAt } = await this.ds.transaction(async (m) => {
-      const locked = await m.findOne(Move, { where: { id: moveId }, lock: { mode: 'pessimistic_write' } });
-      if (!locked) throw new AppException(404, 'not_found', `No move ${moveId}`);
-      const move = await this.moves.get(moveId, undefined, m);
-      if (CLOSED_STAGES.includes(move.stage)) throw new AppException(409, 'conflict', `Escorts cannot be booked for a move that is ${move.stage}`);
+    const { bookingId, expiresAt } = await this.repo.transaction(async (m) => {
+      const move = await this.moves.lockForUpdate(m, moveId);
+      if (CLOSED_STAGES.includes(move.stage)) throw new DomainError(DOMAIN_ERRORS.RECORD_CLOSED, `Escorts cannot be booked for a move that is ${move.stage}`);
       const days = travelDates(move.requestedDeparture, move.travelDays);
       const tz = moveTimeZone(move);
       if (days[0] <= localDate(now.getTime(), tz)) {
-        throw new AppException(409, 'conflict', `The move departs ${days[0]}: too late to ask through a link; call the vendor and book by phone`);
+        throw new DomainError(DOMAIN_ERRORS.TOO_LATE, `The move departs ${days[0]}: too late to ask through a link; call the vendor and book by phone`);
       }
       const assessment = await this.moves.assessmentOf(move, now, m);
       const slots = requiredEscortSlots(assessment.result.jurisdictions);
@@ -154,22 +137,16 @@ export class EscortBookingsService {
       if (outside.length) {
         throw fieldError('jurisdictions', `${outside.join(', ')}: no ${label} needed there (needed in ${slot.jurisdictions.map((x) => x.code).join(', ')})`);
       }
-      const taken = await m
-        .createQueryBuilder(EscortBooking, 'b')
-        .leftJoinAndSelect('b.vendor', 'v')
-        .where('b.move_id = :moveId AND b.position = :p AND b.seat = :s AND b.status IN (:...st) AND b.jurisdictions && CAST(:j AS varchar[])', {
-          moveId, p: dto.position, s: dto.seat, st: [...ACTIVE_STATUSES], j: jurisdictions,
-        })
-        .getOne();
+      const taken = await this.repo.holding(m, moveId, dto.position, dto.seat, jurisdictions, ACTIVE_STATUSES);
       if (taken) {
-        throw new AppException(409, 'conflict', `${label} in ${taken.jurisdictions.filter((j) => jurisdictions.includes(j)).join(', ')} is already ${taken.status} with ${taken.vendor?.company}; call that booking off first`);
+        throw new DomainError(DOMAIN_ERRORS.ALREADY_TAKEN, `${label} in ${taken.jurisdictions.filter((j) => jurisdictions.includes(j)).join(', ')} is already ${taken.status} with ${taken.vendor?.company}; call that booking off first`);
       }
       const vendor = await this.vendors.get(dto.vendorId, m);
       if (!vendor.active) throw fieldError('vendorId', `${vendor.company} is inactive`);
       const uncovered = jurisdictions.filter((j) => !vendor.states.includes(j));
       if (uncovered.length) throw fieldError('vendorId', `${vendor.company} does not cover ${uncovered.join(', ')}`);
 
-      const requester = await m.findOneBy(User, { id: actor.id });
+      const requester = await this.repo.userContact(m, actor.id);
       const dims = assessment.result.dimensions;
       const summary: RequestSummary = {
         move: {
@@ -191,16 +168,14 @@ export class EscortBookingsService {
         certificationStates: jurisdictions.filter((c) => ESCORT_CERTIFICATION_STATES.includes(c)),
         timeZone: tz,
       };
-      const booking = await m.save(
-        m.create(EscortBooking, {
+      const booking = await this.repo.insertBooking(m, {
           moveId, vendorId: vendor.id, position: dto.position, seat: dto.seat, jurisdictions,
           startDate: days[0], endDate: days[days.length - 1],
           meetingPoint: dto.meetingPoint, meetingTime: dto.meetingTime ?? null, notes: dto.notes?.trim() || null,
           status: 'requested', requestSummary: summary, warnings: bookingWarnings(vendor, dto.position, jurisdictions, days[days.length - 1]),
           requestedById: actor.id, requestedAt: now, planRevision: move.planRevision,
-        }),
-      );
-      const { token, expiresAt } = await issueLink(m, booking, move, now);
+        });
+      const { token, expiresAt } = await this.issueLink(m, booking, move, now);
       await this.audit.record(m, {
         moveId, entity: 'escort_booking', entityId: booking.id, action: 'requested', actorId: actor.id,
         after: { vendor: vendor.company, position: booking.position, seat: booking.seat, jurisdictions, startDate: booking.startDate, endDate: booking.endDate, warnings: booking.warnings },
@@ -208,30 +183,26 @@ export class EscortBookingsService {
       await this.mail.enqueue(m, requestMail(booking, vendor, this.link(token), expiresAt));
       return { bookingId: booking.id, expiresAt };
     });
-    return toBookingDto(await this.load(bookingId), expiresAt);
+    return toBookingDto(await this.repo.load(bookingId), expiresAt);
   }
 
   async cancel(moveId: string, bookingId: string, dto: CancelEscortBookingDto, actor: SessionUser): Promise<EscortBookingDto> {
-    await this.ds.transaction(async (m) => {
-      const b = await m.findOne(EscortBooking, { where: { id: bookingId, moveId }, lock: { mode: 'pessimistic_write' } });
-      if (!b) throw new AppException(404, 'not_found', `No escort booking ${bookingId} on move ${moveId}`);
-      if (b.version !== dto.version) throw new AppException(409, 'conflict', `This booking changed (version ${b.version}, yours ${dto.version}); reload it`);
-      if (!ACTIVE_STATUSES.includes(b.status as (typeof ACTIVE_STATUSES)[number])) throw new AppException(409, 'conflict', `A ${b.status} booking cannot be called off`);
+    await this.repo.transaction(async (m) => {
+      const b = await this.repo.lockBooking(m, moveId, bookingId);
+      if (!b) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No escort booking ${bookingId} on move ${moveId}`);
+      if (b.version !== dto.version) throw new DomainError(DOMAIN_ERRORS.VERSION_CONFLICT, `This booking changed (version ${b.version}, yours ${dto.version}); reload it`);
+      if (!ACTIVE_STATUSES.includes(b.status as (typeof ACTIVE_STATUSES)[number])) throw new DomainError(DOMAIN_ERRORS.TRANSITION_REFUSED, `A ${b.status} booking cannot be called off`);
       const before = b.status;
       b.status = 'cancelled';
       b.cancelReason = dto.reason;
       b.version += 1;
-      await m.save(b);
-      const vendor = await m.findOneByOrFail(Vendor, { id: b.vendorId });
+      await this.repo.saveBooking(m, b);
+      const vendor = await this.repo.vendorOf(m, b.id);
       await this.audit.record(m, {
         moveId, entity: 'escort_booking', entityId: b.id, action: 'cancelled', actorId: actor.id, before: { status: before }, after: { status: 'cancelled' }, reason: dto.reason,
       });
       await this.mail.enqueue(m, cancellationMail(b, vendor));
     });
-    return toBookingDto(await this.load(bookingId), null);
-  }
-
-  private load(id: string): Promise<EscortBooking> {
-    return this.ds.manager.findOneOrFail(EscortBooking, { where: { id }, relations: { vendor: true, requestedBy: true } });
+    return toBookingDto(await this.repo.load(bookingId), null);
   }
 }

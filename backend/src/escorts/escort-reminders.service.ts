@@ -1,18 +1,16 @@
 import { Inject, Injectable, Logger, OnApplicationBootstrap, OnModuleDestroy } from '@nestjs/common';
 import { SchedulerRegistry } from '@nestjs/schedule';
-import { DataSource } from 'typeorm';
 import { localDate } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
 import { MailService } from '../mail/mail.service';
-import { Move } from '../moves/entities/move.entity';
-import { User } from '../users/entities/user.entity';
-import { Vendor } from '../vendors/entities/vendor.entity';
-import { EscortBooking } from './entities/escort-booking.entity';
+import { MovesRepository } from '../moves/moves.repository';
 import { departureReminderMail, dispatcherReminderNotice, reminderMail } from './escort-mails';
-import { issueLink, moveTimeZone } from './escort-bookings.service';
+import { EscortBookingsService, moveTimeZone } from './escort-bookings.service';
 import { ESCORT_SETTINGS, type EscortSettings } from './escort.settings';
+import { EscortsRepository } from './escorts.repository';
 
 export type ReminderReport = { unanswered: number; departure: number };
+/** A request unanswered this long gets its reminder. */
 export const UNANSWERED_AFTER_MS = 24 * 3_600_000;
 const NAME = 'escort-reminders';
 
@@ -29,7 +27,9 @@ export class EscortRemindersService implements OnApplicationBootstrap, OnModuleD
   private running: Promise<unknown> | null = null;
 
   constructor(
-    private readonly ds: DataSource,
+    private readonly repo: EscortsRepository,
+    private readonly moves: MovesRepository,
+    private readonly bookings: EscortBookingsService,
     private readonly mail: MailService,
     private readonly audit: AuditService,
     private readonly registry: SchedulerRegistry,
@@ -61,52 +61,37 @@ export class EscortRemindersService implements OnApplicationBootstrap, OnModuleD
 
   /** Sends what is due at `now`. `moveIds` limits the run to some moves (a manual re-run, or a test). */
   async run(now: Date, moveIds?: string[]): Promise<ReminderReport> {
-    const scope = moveIds ? `AND b.move_id = ANY($2)` : '';
-    const params = (first: unknown) => (moveIds ? [first, moveIds] : [first]);
     const report: ReminderReport = { unanswered: 0, departure: 0 };
 
-    await this.ds.transaction(async (m) => {
-      const due: { id: string }[] = await m.query(
-        `SELECT b.id FROM escort_bookings b JOIN moves mv ON mv.id = b.move_id
-         WHERE b.status = 'requested' AND b.reminder_sent_at IS NULL AND b.requested_at <= $1::timestamptz - interval '24 hours'
-           AND mv.stage NOT IN ('running','delivered','cancelled') ${scope}
-         ORDER BY b.requested_at LIMIT 200 FOR UPDATE OF b SKIP LOCKED`,
-        params(now),
-      );
+    await this.repo.transaction(async (m) => {
+      const due = await this.repo.unansweredDue(m, new Date(now.getTime() - UNANSWERED_AFTER_MS), moveIds);
       for (const { id } of due) {
-        const b = await m.findOneByOrFail(EscortBooking, { id });
-        const move = await m.findOneByOrFail(Move, { id: b.moveId });
-        const vendor = await m.findOneByOrFail(Vendor, { id: b.vendorId });
-        await m.update(EscortBooking, { id }, { reminderSentAt: now });
-        // a run that has started, or starts before a new link could be used, gets no reminder
-        if (b.startDate <= localDate(now.getTime(), moveTimeZone(move))) continue;
-        const { token, expiresAt } = await issueLink(m, b, move, now);
+        const b = await this.repo.load(id, m);
+        const move = await this.moves.findWithEquipment(b.moveId, m);
+        const vendor = b.vendor!;
+        await this.repo.markReminded(m, id, now);
+        // a run that has started, or starts before a new link could be used, gets no reminder (the move is always there: a foreign key)
+        if (!move || b.startDate <= localDate(now.getTime(), moveTimeZone(move))) continue;
+        const { token, expiresAt } = await this.bookings.issueLink(m, b, move, now);
         await this.mail.enqueue(m, reminderMail(b, vendor, `${this.mail.settings.appUrl}/escort-response/${token}`, expiresAt));
-        const dispatcher = b.requestedById ? await m.findOneBy(User, { id: b.requestedById }) : null;
+        const dispatcher = b.requestedBy ?? null;
         if (dispatcher) await this.mail.enqueue(m, dispatcherReminderNotice(b, vendor, dispatcher.email));
         await this.audit.record(m, { moveId: b.moveId, entity: 'escort_booking', entityId: b.id, action: 'reminded', actorId: null, after: { vendor: vendor.company, unansweredSince: b.requestedAt.toISOString() } });
         report.unanswered++;
       }
     });
 
-    await this.ds.transaction(async (m) => {
+    await this.repo.transaction(async (m) => {
       // a window of dates wide enough for every US zone; the exact local day is checked below
-      const due: { id: string }[] = await m.query(
-        `SELECT b.id FROM escort_bookings b JOIN moves mv ON mv.id = b.move_id
-         WHERE b.status = 'confirmed' AND b.departure_reminder_sent_at IS NULL
-           AND b.start_date BETWEEN ($1::timestamptz AT TIME ZONE 'UTC')::date AND ($1::timestamptz AT TIME ZONE 'UTC')::date + 2
-           AND mv.stage NOT IN ('delivered','cancelled') ${scope}
-         ORDER BY b.start_date LIMIT 200 FOR UPDATE OF b SKIP LOCKED`,
-        params(now),
-      );
+      const due = await this.repo.departureDue(m, now, moveIds);
       for (const { id } of due) {
-        const b = await m.findOneByOrFail(EscortBooking, { id });
-        const move = await m.findOne(Move, { where: { id: b.moveId }, relations: { driver: true } });
+        const b = await this.repo.load(id, m);
+        const move = await this.moves.findWithEquipment(b.moveId, m);
         if (!move) continue;
         const today = localDate(now.getTime(), moveTimeZone(move));
         if (today < dayBefore(b.startDate) || today > b.startDate) continue;
-        const vendor = await m.findOneByOrFail(Vendor, { id: b.vendorId });
-        await m.update(EscortBooking, { id }, { departureReminderSentAt: now });
+        const vendor = b.vendor!;
+        await this.repo.markDepartureReminded(m, id, now);
         await this.mail.enqueue(m, departureReminderMail(b, vendor, move.driver?.name ?? null));
         await this.audit.record(m, { moveId: b.moveId, entity: 'escort_booking', entityId: b.id, action: 'departure_reminder', actorId: null, after: { vendor: vendor.company, startDate: b.startDate } });
         report.departure++;

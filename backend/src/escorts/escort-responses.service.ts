@@ -1,56 +1,60 @@
 import { Injectable } from '@nestjs/common';
-import { DataSource, EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import {
-  answerWarnings, BOOKING_STATUS_LABELS, ESCORT_POSITION_LABELS, jurisdictionByCode, localDate, PLANNING_CAUTION,
+  answerWarnings, BOOKING_STATUS_LABELS, DOMAIN_ERRORS, DomainError, ESCORT_POSITION_LABELS, jurisdictionByCode, localDate, PLANNING_CAUTION,
   type EscortAnswer, type EscortAnswerResult, type EscortRequestView,
 } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
 import { AppException, fieldError } from '../core/app-exception';
 import { MailService } from '../mail/mail.service';
-import { Move } from '../moves/entities/move.entity';
-import { Vendor } from '../vendors/entities/vendor.entity';
+import type { Move } from '../moves/entities/move.entity';
+import { MovesRepository } from '../moves/moves.repository';
 import { EscortAnswerDto } from './dto/escorts.dto';
-import { EscortBooking } from './entities/escort-booking.entity';
-import { EscortResponseToken } from './entities/escort-response-token.entity';
+import type { EscortBooking } from './entities/escort-booking.entity';
+import type { EscortResponseToken } from './entities/escort-response-token.entity';
 import { answerNotice, confirmationMail } from './escort-mails';
 import { hashToken, TOKEN_PATTERN } from './escort-tokens';
+import { EscortsRepository, type BookingVendor } from './escorts.repository';
 
-/** Answers for a link that cannot be used. They say why, and nothing about the booking behind it. */
+/**
+ * Answers for a link that cannot be used. They say why, and nothing about the booking behind it. An invalid or
+ * expired link keeps its plain body (`{ statusCode, error, message, details }`, no domain code): the vendor's page
+ * and its tests read exactly that; a used or closed link is the domain's LINK_CLOSED, with `details.link` saying which.
+ */
 const INVALID = () => new AppException(404, 'not_found', 'This link is not valid. Check that it was copied whole, or ask the dispatcher who sent it for a new one.', { link: 'invalid' });
 const EXPIRED = () => new AppException(410, 'not_found', 'This link has expired. Ask the dispatcher who sent it for a new one.', { link: 'expired' });
-const USED = () => new AppException(409, 'conflict', 'This link has already been used to answer. Call the dispatcher to change the answer.', { link: 'used' });
-const CLOSED = () => new AppException(409, 'conflict', 'This request is no longer open. Call the dispatcher if you have questions.', { link: 'closed' });
+const USED = () => new DomainError(DOMAIN_ERRORS.LINK_CLOSED, 'This link has already been used to answer. Call the dispatcher to change the answer.', { link: 'used' });
+const CLOSED = () => new DomainError(DOMAIN_ERRORS.LINK_CLOSED, 'This request is no longer open. Call the dispatcher if you have questions.', { link: 'closed' });
 
 const MAX_PROPOSAL_DAYS = 60;
 
-type Found = { token: EscortResponseToken; booking: EscortBooking; move: Move; vendor: Vendor };
+type Found = { token: EscortResponseToken; booking: EscortBooking; move: Move; vendor: BookingVendor };
 
 /** The vendor's side: the request behind a link, and the one answer it takes. No account; the link is the credential. */
 @Injectable()
 export class EscortResponsesService {
   constructor(
-    private readonly ds: DataSource,
+    private readonly repo: EscortsRepository,
+    private readonly moves: MovesRepository,
     private readonly audit: AuditService,
     private readonly mail: MailService,
   ) {}
 
   private async find(m: EntityManager, token: string, now: Date, lock: boolean): Promise<Found> {
     if (!TOKEN_PATTERN.test(token)) throw INVALID();
-    const t = await m.findOne(EscortResponseToken, { where: { tokenHash: hashToken(token) }, ...(lock ? { lock: { mode: 'pessimistic_write' as const } } : {}) });
-    if (!t) throw INVALID();
-    const booking = await m.findOne(EscortBooking, { where: { id: t.bookingId }, ...(lock ? { lock: { mode: 'pessimistic_write' as const } } : {}) });
-    if (!booking) throw INVALID();
+    const { token: t, booking } = await this.repo.linkWithBooking(m, hashToken(token), lock);
+    if (!t || !booking) throw INVALID();
     if (t.usedAt || booking.status === 'confirmed' || booking.status === 'declined' || booking.status === 'proposed') throw USED();
     if (booking.status !== 'requested') throw CLOSED();
     if (t.expiresAt.getTime() <= now.getTime()) throw EXPIRED();
-    const move = await m.findOneByOrFail(Move, { id: booking.moveId });
-    if (['running', 'delivered', 'cancelled'].includes(move.stage)) throw CLOSED();
-    const vendor = await m.findOneByOrFail(Vendor, { id: booking.vendorId });
+    const move = await this.moves.findWithEquipment(booking.moveId, m);
+    if (!move || ['running', 'delivered', 'cancelled'].includes(move.stage)) throw CLOSED();
+    const vendor = await this.repo.vendorOf(m, booking.id);
     return { token: t, booking, move, vendor };
   }
 
   async view(token: string, now: Date): Promise<EscortRequestView> {
-    const { token: t, booking: b, vendor: v } = await this.find(this.ds.manager, token, now, false);
+    const { token: t, booking: b, vendor: v } = await this.find(this.repo.manager, token, now, false);
     const s = b.requestSummary;
     return {
       vendor: {
@@ -78,16 +82,10 @@ export class EscortResponsesService {
 
   /** Validity windows of the move's issued permits, by jurisdiction (the permits table may not exist yet). */
   private async permitWindows(m: EntityManager, move: Move, jurisdictions: string[]): Promise<{ code: string; from: string; to: string }[]> {
-    const [{ t }] = await m.query(`SELECT to_regclass('public.permits') IS NOT NULL AS t`);
-    if (!t) return [];
-    const rows: { jurisdiction: string; valid_from: Date; valid_to: Date }[] = await m.query(
-      `SELECT jurisdiction, valid_from, valid_to FROM permits
-       WHERE move_id = $1 AND status = 'issued' AND valid_from IS NOT NULL AND valid_to IS NOT NULL AND jurisdiction = ANY($2)`,
-      [move.id, jurisdictions],
-    );
+    const rows = await this.repo.issuedPermitWindows(m, move.id, jurisdictions);
     return rows.map((r) => {
       const tz = move.route.find((s) => s.jurisdiction === r.jurisdiction)?.timeZone ?? jurisdictionByCode(r.jurisdiction)?.timeZone ?? 'UTC';
-      return { code: r.jurisdiction, from: localDate(new Date(r.valid_from).getTime(), tz), to: localDate(new Date(r.valid_to).getTime(), tz) };
+      return { code: r.jurisdiction, from: localDate(r.validFrom.getTime(), tz), to: localDate(r.validTo.getTime(), tz) };
     });
   }
 
@@ -125,7 +123,7 @@ export class EscortResponsesService {
 
   /** Records the one answer a link takes. Everything (booking, token, audit, e-mails) in one transaction. */
   async answer(token: string, dto: EscortAnswerDto, now: Date): Promise<EscortAnswerResult> {
-    return this.ds.transaction(async (m) => {
+    return this.repo.transaction(async (m) => {
       const f = await this.find(m, token, now, true);
       const answer = await this.checkAnswer(m, dto, f, now);
       const b = f.booking;
@@ -135,9 +133,9 @@ export class EscortResponsesService {
       b.respondedAt = now;
       b.warnings = [...b.warnings, ...newWarnings];
       b.version += 1;
-      await m.save(b);
+      await this.repo.saveBooking(m, b);
       // every link of this booking is spent by one answer
-      await m.query(`UPDATE escort_response_tokens SET used_at = $2 WHERE booking_id = $1 AND used_at IS NULL`, [b.id, now]);
+      await this.repo.spendLinks(m, b.id, now);
       await this.audit.record(m, {
         moveId: b.moveId, entity: 'escort_booking', entityId: b.id, action: 'answered', actorId: null,
         before: { status: 'requested' }, after: { status: b.status, by: f.vendor.company, answer }, reason: answer.reason ?? null,

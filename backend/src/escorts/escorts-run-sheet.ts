@@ -3,30 +3,24 @@ import type { EntityManager } from 'typeorm';
 import { BOOKING_STATUS_LABELS, slotLabel, type RunSheetEscort } from '@amberline/common';
 import type { Move } from '../moves/entities/move.entity';
 import { RunSheetSourcesRegistry, type RunSheetSource } from '../run-sheets/run-sheet-sources';
-import { preparedQuery } from '../database/prepared';
-import type { EscortBooking } from './entities/escort-booking.entity';
 import { ACTIVE_STATUSES } from './escort-bookings.service';
+import { EscortsRepository } from './escorts.repository';
 
 /** Gives the driver's run sheet the move's escorts: who runs which position where, their phone and the meeting point. */
 @Injectable()
 export class EscortsRunSheetSource implements RunSheetSource, OnModuleInit {
   readonly name = 'escorts';
-  constructor(private readonly registry: RunSheetSourcesRegistry) {}
+  constructor(
+    private readonly registry: RunSheetSourcesRegistry,
+    private readonly repo: EscortsRepository,
+  ) {}
 
   onModuleInit(): void {
     this.registry.register(this);
   }
 
   async escorts(move: Move, manager: EntityManager): Promise<RunSheetEscort[]> {
-    const rows = await preparedQuery<EscortRow>(
-      manager,
-      `SELECT b.jurisdictions, b.position, b.seat, b.status, b.answer, b.meeting_point AS "meetingPoint", b.meeting_time AS "meetingTime",
-              v.company, v.phone
-         FROM escort_bookings b JOIN vendors v ON v.id = b.vendor_id
-        WHERE b.move_id = $1 AND b.status = ANY($2::varchar[])
-        ORDER BY b.position, b.seat, b.id`,
-      [move.id, [...ACTIVE_STATUSES]],
-    );
+    const rows = await this.repo.runSheetEscorts(manager, move.id, ACTIVE_STATUSES);
     return rows.map((b) => ({
       jurisdiction: b.jurisdictions.join(', '),
       position: slotLabel(b.position, b.seat),
@@ -39,5 +33,3 @@ export class EscortsRunSheetSource implements RunSheetSource, OnModuleInit {
     }));
   }
 }
-
-type EscortRow = Pick<EscortBooking, 'jurisdictions' | 'position' | 'seat' | 'status' | 'answer' | 'meetingPoint' | 'meetingTime'> & { company: string; phone: string };

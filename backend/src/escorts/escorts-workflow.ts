@@ -1,12 +1,12 @@
 import { Injectable, OnModuleInit } from '@nestjs/common';
-import { In, type EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import { jurisdictionByCode, requiredEscortSlots, slotLabel, type AssessmentDto, type UnmetCondition } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
 import { MoveExtensionsRegistry, type MoveExtension, type PlanChangeContext, type TransitionContext } from '../moves/move-extensions';
 import type { Move } from '../moves/entities/move.entity';
 import { MovesService } from '../moves/moves.service';
-import { EscortBooking } from './entities/escort-booking.entity';
-import { ACTIVE_STATUSES, coverageOf } from './escort-bookings.service';
+import { ACTIVE_STATUSES, EscortBookingsService } from './escort-bookings.service';
+import { EscortsRepository } from './escorts.repository';
 
 const STATUS_TEXT = { requested: 'awaiting the vendor\u2019s answer', proposed: 'the vendor proposed other dates', open: 'not booked', confirmed: 'confirmed' } as const;
 const name = (code: string) => jurisdictionByCode(code)?.name ?? code;
@@ -23,6 +23,8 @@ export class EscortsWorkflow implements MoveExtension, OnModuleInit {
   constructor(
     private readonly registry: MoveExtensionsRegistry,
     private readonly moves: MovesService,
+    private readonly bookings: EscortBookingsService,
+    private readonly repo: EscortsRepository,
     private readonly audit: AuditService,
   ) {}
 
@@ -32,7 +34,7 @@ export class EscortsWorkflow implements MoveExtension, OnModuleInit {
 
   async unmetConditions(ctx: TransitionContext): Promise<UnmetCondition[]> {
     if (ctx.to !== 'escorts_booked') return [];
-    const coverage = await coverageOf(ctx.manager, ctx.move, ctx.assessment);
+    const coverage = await this.bookings.coverage(ctx.manager, ctx.move, ctx.assessment);
     return coverage.flatMap((s) =>
       s.jurisdictions
         .filter((j) => j.status !== 'confirmed')
@@ -44,7 +46,7 @@ export class EscortsWorkflow implements MoveExtension, OnModuleInit {
   async scheduleFacts(ctx: { manager: EntityManager; move: Move; assessment: AssessmentDto }) {
     const slots = requiredEscortSlots(ctx.assessment.result.jurisdictions);
     if (!slots.length) return {};
-    const confirmed = await ctx.manager.find(EscortBooking, { where: { moveId: ctx.move.id, status: 'confirmed' } });
+    const confirmed = await this.repo.withStatus(ctx.manager, ctx.move.id, ['confirmed']);
     return {
       escortSlots: slots.map((s) => ({ label: slotLabel(s.position, s.seat), jurisdictions: s.jurisdictions.map((j) => j.code) })),
       escorts: confirmed.map((b) => ({ label: slotLabel(b.position, b.seat), jurisdictions: b.jurisdictions, startDate: b.startDate, endDate: b.endDate })),
@@ -53,7 +55,7 @@ export class EscortsWorkflow implements MoveExtension, OnModuleInit {
 
   async transitionNotes(ctx: TransitionContext): Promise<string[]> {
     if (ctx.to !== 'escorts_booked') return [];
-    const coverage = await coverageOf(ctx.manager, ctx.move, ctx.assessment);
+    const coverage = await this.bookings.coverage(ctx.manager, ctx.move, ctx.assessment);
     if (!coverage.length) {
       // where the issued permit records the escorts it governs them (whatever the rulebook had), else the rulebook answers
       const byPermit = ctx.assessment.result.jurisdictions.filter((j) => j.governedBy?.topics.includes('escorts'));
@@ -73,10 +75,10 @@ export class EscortsWorkflow implements MoveExtension, OnModuleInit {
 
   /** A plan change may need more escorts, other dates or other states: record which positions it left unmet. */
   async onPlanChanged(ctx: PlanChangeContext): Promise<void> {
-    const active = await ctx.manager.count(EscortBooking, { where: { moveId: ctx.after.id, status: In([...ACTIVE_STATUSES]) } });
+    const active = await this.repo.countWithStatus(ctx.manager, ctx.after.id, ACTIVE_STATUSES);
     if (!active) return;
     const assessment = await this.moves.assessmentOf(ctx.after, new Date(), ctx.manager);
-    const coverage = await coverageOf(ctx.manager, ctx.after, assessment);
+    const coverage = await this.bookings.coverage(ctx.manager, ctx.after, assessment);
     const unmet = coverage.flatMap((s) => s.jurisdictions.filter((j) => j.status !== 'confirmed').map((j) => `${slotLabel(s.position, s.seat)} in ${name(j.code)}: ${STATUS_TEXT[j.status]}`));
     if (!unmet.length) return;
     await this.audit.record(ctx.manager, {

@@ -15,6 +15,7 @@ import { EscortResponsesController } from './escort-responses.controller';
 import { EscortResponsesService } from './escort-responses.service';
 import { ESCORT_SETTINGS, escortSettingsFrom } from './escort.settings';
 import { EscortsRunSheetSource } from './escorts-run-sheet';
+import { EscortsRepository } from './escorts.repository';
 import { EscortsWorkflow } from './escorts-workflow';
 
 @Module({
@@ -22,7 +23,7 @@ import { EscortsWorkflow } from './escorts-workflow';
   controllers: [EscortBookingsController, EscortResponsesController],
   providers: [
     { provide: ESCORT_SETTINGS, inject: [ConfigService], useFactory: escortSettingsFrom },
-    EscortBookingsService, EscortResponsesService, EscortRemindersService, EscortsWorkflow, EscortsRunSheetSource,
+    EscortsRepository, EscortBookingsService, EscortResponsesService, EscortRemindersService, EscortsWorkflow, EscortsRunSheetSource,
   ],
   exports: [EscortBookingsService, EscortRemindersService],
 })
