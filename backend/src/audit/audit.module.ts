@@ -1,11 +1,12 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuditRepository } from './audit.repository';
 import { AuditService } from './audit.service';
 import { AuditEntry } from './entities/audit-entry.entity';
 
 @Module({
   imports: [TypeOrmModule.forFeature([AuditEntry])],
-  providers: [AuditService],
+  providers: [AuditRepository, AuditService],
   exports: [AuditService],
 })
 export class AuditModule {}

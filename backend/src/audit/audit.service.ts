@@ -1,8 +1,7 @@
 import { Injectable } from '@nestjs/common';
-import { InjectRepository } from '@nestjs/typeorm';
-import { EntityManager, Repository } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import type { HistoryEntryDto } from '@amberline/common';
-import { AuditEntry } from './entities/audit-entry.entity';
+import { AuditRepository } from './audit.repository';
 
 export type AuditRecord = {
   moveId?: string | null;
@@ -18,10 +17,10 @@ export type AuditRecord = {
 /** The audit trail. Always written inside the transaction of the change it records. */
 @Injectable()
 export class AuditService {
-  constructor(@InjectRepository(AuditEntry) private readonly entries: Repository<AuditEntry>) {}
+  constructor(private readonly repo: AuditRepository) {}
 
   async record(manager: EntityManager, r: AuditRecord): Promise<void> {
-    await manager.getRepository(AuditEntry).insert({
+    await this.repo.insert(manager, {
       moveId: r.moveId ?? null,
       entity: r.entity,
       entityId: r.entityId,
@@ -34,7 +33,7 @@ export class AuditService {
   }
 
   async forMove(moveId: string): Promise<HistoryEntryDto[]> {
-    const rows = await this.entries.find({ where: { moveId }, relations: { actor: true }, order: { at: 'ASC', id: 'ASC' } });
+    const rows = await this.repo.forMove(moveId);
     return rows.map((e) => ({
       id: String(e.id),
       at: e.at.toISOString(),

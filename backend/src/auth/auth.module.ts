@@ -8,6 +8,7 @@ import { UsersModule } from '../users/users.module';
 import { AuthController } from './auth.controller';
 import { AuthService } from './auth.service';
 import { JwtAuthGuard } from './jwt-auth.guard';
+import { LoginThrottleRepository } from './login-throttle.repository';
 import { LoginThrottleService } from './login-throttle.service';
 
 @Module({
@@ -27,6 +28,7 @@ import { LoginThrottleService } from './login-throttle.service';
   controllers: [AuthController],
   providers: [
     AuthService,
+    LoginThrottleRepository,
     LoginThrottleService,
     { provide: APP_GUARD, useClass: JwtAuthGuard },
     { provide: APP_GUARD, useClass: RolesGuard },

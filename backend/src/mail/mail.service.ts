@@ -1,10 +1,9 @@
 import { Inject, Injectable, Logger } from '@nestjs/common';
-import { InjectRepository } from '@nestjs/typeorm';
 import { createTransport, type Transporter } from 'nodemailer';
-import { DataSource, EntityManager, Repository } from 'typeorm';
-import type { MailStatus, OutboxMessageDto } from '@amberline/common';
-import { AppException } from '../core/app-exception';
-import { OutboxMessage, type StoredAttachment } from './entities/outbox-message.entity';
+import type { EntityManager } from 'typeorm';
+import { DOMAIN_ERRORS, DomainError, type MailStatus, type OutboxMessageDto } from '@amberline/common';
+import type { OutboxMessage, StoredAttachment } from './entities/outbox-message.entity';
+import { MailRepository } from './mail.repository';
 import { backoffMs, MAIL_SETTINGS, type MailSettings } from './mail.settings';
 
 /** An e-mail to write to the outbox. */
@@ -21,16 +20,6 @@ export type OutgoingMail = {
 };
 
 export type SendReport = { sent: number; retrying: number; failed: number };
-
-type OutboxRow = {
-  id: string;
-  to_addresses: string[];
-  subject: string;
-  text_body: string;
-  html_body: string | null;
-  attachments: StoredAttachment[];
-  attempts: number;
-};
 
 /** Errors that mean the server could not be reached or talked to: the whole batch waits for the next run. */
 const CONNECTION_ERRORS = new Set(['ECONNECTION', 'ETIMEDOUT', 'ESOCKET', 'EDNS', 'ECONNREFUSED', 'EGREETING']);
@@ -61,9 +50,8 @@ export class MailService {
   private readonly logger = new Logger('Mail');
 
   constructor(
-    private readonly ds: DataSource,
+    private readonly repo: MailRepository,
     @Inject(MAIL_SETTINGS) readonly settings: MailSettings,
-    @InjectRepository(OutboxMessage) private readonly outbox: Repository<OutboxMessage>,
   ) {}
 
   /** Writes one message to the outbox inside `manager`'s transaction. Returns its id, or null when its dedupe key was already used. */
@@ -75,16 +63,10 @@ export class MailService {
       contentType: a.contentType,
       contentBase64: Buffer.from(a.content).toString('base64'),
     }));
-    const rows: { id: string }[] = await manager.query(
-      `INSERT INTO mail_outbox (channel, to_addresses, subject, text_body, html_body, attachments, dedupe_key, related_entity, related_id)
-       VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9)
-       ON CONFLICT (dedupe_key) DO NOTHING RETURNING id`,
-      [
-        this.settings.channel, to, mail.subject.slice(0, 300), mail.text, mail.html ?? null, JSON.stringify(attachments),
-        mail.dedupeKey ?? null, mail.related?.entity ?? null, mail.related?.id ?? null,
-      ],
-    );
-    return rows[0]?.id ?? null;
+    return this.repo.insert(manager, {
+      channel: this.settings.channel, to, subject: mail.subject.slice(0, 300), text: mail.text, html: mail.html ?? null, attachments,
+      dedupeKey: mail.dedupeKey ?? null, relatedEntity: mail.related?.entity ?? null, relatedId: mail.related?.id ?? null,
+    });
   }
 
   private transport(): Transporter {
@@ -106,14 +88,8 @@ export class MailService {
     const transport = this.transport();
     try {
       for (let i = 0; i < limit; i++) {
-        const outcome = await this.ds.transaction(async (m) => {
-          const rows: OutboxRow[] = await m.query(
-            `SELECT id, to_addresses, subject, text_body, html_body, attachments, attempts FROM mail_outbox
-             WHERE status = 'pending' AND channel = $1 AND next_attempt_at <= $2
-             ORDER BY next_attempt_at, created_at LIMIT 1 FOR UPDATE SKIP LOCKED`,
-            [this.settings.channel, now],
-          );
-          const row = rows[0];
+        const outcome = await this.repo.transaction(async (m) => {
+          const row = await this.repo.takeDue(m, this.settings.channel, now);
           if (!row) return 'none' as const;
           try {
             const info = await transport.sendMail({
@@ -126,10 +102,7 @@ export class MailService {
               messageId: `<${row.id}@outbox.amberline>`,
               attachments: row.attachments.map((a) => ({ filename: a.filename, contentType: a.contentType, content: Buffer.from(a.contentBase64, 'base64') })),
             });
-            await m.query(
-              `UPDATE mail_outbox SET status = 'sent', attempts = attempts + 1, sent_at = $2, smtp_message_id = $3, smtp_response = $4, last_error = NULL WHERE id = $1`,
-              [row.id, now, String(info.messageId ?? '').slice(0, 300), String(info.response ?? '').slice(0, 1000)],
-            );
+            await this.repo.markSent(m, row.id, now, String(info.messageId ?? '').slice(0, 300), String(info.response ?? '').slice(0, 1000));
             return 'sent' as const;
           } catch (e) {
             const err = e as Error & { code?: string; responseCode?: number };
@@ -137,9 +110,7 @@ export class MailService {
             const permanent = typeof err.responseCode === 'number' && err.responseCode >= 500 && err.responseCode < 600;
             const failed = permanent || attempts >= this.settings.maxAttempts;
             const next = new Date(now.getTime() + backoffMs(attempts, this.settings));
-            await m.query(`UPDATE mail_outbox SET status = $2, attempts = $3, next_attempt_at = $4, last_error = $5 WHERE id = $1`, [
-              row.id, failed ? 'failed' : 'pending', attempts, next, `${err.code ? `${err.code}: ` : ''}${err.message}`.slice(0, 1000),
-            ]);
+            await this.repo.markAttemptFailed(m, row.id, failed ? 'failed' : 'pending', attempts, next, `${err.code ? `${err.code}: ` : ''}${err.message}`.slice(0, 1000));
             if (failed) this.logger.warn(`mail ${row.id} failed for good after ${attempts} attempt(s): ${err.message}`);
             return failed ? ('failed' as const) : CONNECTION_ERRORS.has(err.code ?? '') ? ('unreachable' as const) : ('retrying' as const);
           }
@@ -158,23 +129,18 @@ export class MailService {
   }
 
   async list(status: MailStatus | undefined, limit: number): Promise<OutboxMessageDto[]> {
-    const rows = await this.outbox.find({ where: status ? { status } : {}, order: { createdAt: 'DESC' }, take: limit });
-    return rows.map(toOutboxDto);
+    return (await this.repo.list(status, limit)).map(toOutboxDto);
   }
 
   /** Puts a failed message back in the queue, due now. */
   async retry(id: string, now: Date): Promise<OutboxMessageDto> {
-    const res = await this.outbox
-      .createQueryBuilder()
-      .update()
-      .set({ status: 'pending', nextAttemptAt: now, attempts: 0 })
-      .where(`id = :id AND status = 'failed'`, { id })
-      .execute();
-    if (res.affected !== 1) {
-      const exists = await this.outbox.findOneBy({ id });
-      if (!exists) throw new AppException(404, 'not_found', `No message ${id}`);
-      throw new AppException(409, 'conflict', `Message ${id} is ${exists.status}; only a failed message can be retried`);
+    if (!(await this.repo.requeueFailed(id, now))) {
+      const exists = await this.repo.find(id);
+      if (!exists) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No message ${id}`);
+      throw new DomainError(DOMAIN_ERRORS.TRANSITION_REFUSED, `Message ${id} is ${exists.status}; only a failed message can be retried`);
     }
-    return toOutboxDto(await this.outbox.findOneByOrFail({ id }));
+    const message = await this.repo.find(id);
+    if (!message) throw new DomainError(DOMAIN_ERRORS.NOT_FOUND, `No message ${id}`);
+    return toOutboxDto(message);
   }
 }
