@@ -9,7 +9,7 @@ import { AuditService } from '../audit/audit.service';
 import { fieldError } from '../core/app-exception';
 import { MailService } from '../mail/mail.service';
 import { MAIL_SETTINGS, type MailSettings } from '../mail/mail.settings';
-import type { Move } from '../moves/entities/move.entity';
+import type { Move } from '../moves/moves.repository';
 import { MovesService } from '../moves/moves.service';
 import { VendorsService } from '../vendors/vendors.service';
 import { CancelEscortBookingDto, CreateEscortBookingDto } from './dto/escorts.dto';

@@ -7,8 +7,7 @@ import {
 import { AuditService } from '../audit/audit.service';
 import { AppException, fieldError } from '../core/app-exception';
 import { MailService } from '../mail/mail.service';
-import type { Move } from '../moves/entities/move.entity';
-import { MovesRepository } from '../moves/moves.repository';
+import { MovesRepository, type Move } from '../moves/moves.repository';
 import { EscortAnswerDto } from './dto/escorts.dto';
 import type { EscortBooking } from './entities/escort-booking.entity';
 import type { EscortResponseToken } from './entities/escort-response-token.entity';

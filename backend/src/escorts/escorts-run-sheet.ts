@@ -1,7 +1,7 @@
 import { Injectable, OnModuleInit } from '@nestjs/common';
 import type { EntityManager } from 'typeorm';
 import { BOOKING_STATUS_LABELS, slotLabel, type RunSheetEscort } from '@amberline/common';
-import type { Move } from '../moves/entities/move.entity';
+import type { Move } from '../moves/moves.repository';
 import { RunSheetSourcesRegistry, type RunSheetSource } from '../run-sheets/run-sheet-sources';
 import { ACTIVE_STATUSES } from './escort-bookings.service';
 import { EscortsRepository } from './escorts.repository';

@@ -3,7 +3,7 @@ import type { EntityManager } from 'typeorm';
 import { jurisdictionByCode, requiredEscortSlots, slotLabel, type AssessmentDto, type UnmetCondition } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
 import { MoveExtensionsRegistry, type MoveExtension, type PlanChangeContext, type TransitionContext } from '../moves/move-extensions';
-import type { Move } from '../moves/entities/move.entity';
+import type { Move } from '../moves/moves.repository';
 import { MovesService } from '../moves/moves.service';
 import { ACTIVE_STATUSES, EscortBookingsService } from './escort-bookings.service';
 import { EscortsRepository } from './escorts.repository';

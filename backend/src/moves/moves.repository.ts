@@ -7,6 +7,9 @@ import { Trailer } from '../fleet/entities/trailer.entity';
 import { User } from '../users/entities/user.entity';
 import { Move } from './entities/move.entity';
 
+/** A move as the moves module hands it to others (its row, with equipment and driver when read with them). */
+export type { Move };
+
 /** The tractor and trailer a move (or a draft) is planned on, as the moves module reads them. */
 export type MoveTractor = NonNullable<Move['tractor']>;
 export type MoveTrailer = NonNullable<Move['trailer']>;

@@ -8,9 +8,8 @@ import {
 import { AuditService } from '../audit/audit.service';
 import { MailService } from '../mail/mail.service';
 import { AppException, fieldError } from '../core/app-exception';
-import type { Move } from '../moves/entities/move.entity';
 import { MoveExtensionsRegistry } from '../moves/move-extensions';
-import { MovesRepository, type MoveTrailer } from '../moves/moves.repository';
+import { MovesRepository, type Move, type MoveTrailer } from '../moves/moves.repository';
 import { MovesService, toMoveDto } from '../moves/moves.service';
 import { AcknowledgeDto, DepartureChecksDtoIn } from './dto/run-sheet.dto';
 import type { DepartureChecks } from './entities/departure-checks.entity';
