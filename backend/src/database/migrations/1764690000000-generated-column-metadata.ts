@@ -22,5 +22,8 @@ export class GeneratedColumnMetadata1764690000000 implements MigrationInterface 
 
   async down(q: QueryRunner): Promise<void> {
     await q.query(`DELETE FROM typeorm_metadata WHERE "type" = 'GENERATED_COLUMN' AND "table" = 'permits' AND "name" = 'urgency_group'`);
+    // the table came with this migration: it goes with it unless something else was recorded there since
+    const [{ n }] = await q.query(`SELECT count(*)::int AS n FROM typeorm_metadata`);
+    if (n === 0) await q.query(`DROP TABLE typeorm_metadata`);
   }
 }
