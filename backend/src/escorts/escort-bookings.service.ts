@@ -169,12 +169,12 @@ export class EscortBookingsService {
         timeZone: tz,
       };
       const booking = await this.repo.insertBooking(m, {
-          moveId, vendorId: vendor.id, position: dto.position, seat: dto.seat, jurisdictions,
-          startDate: days[0], endDate: days[days.length - 1],
-          meetingPoint: dto.meetingPoint, meetingTime: dto.meetingTime ?? null, notes: dto.notes?.trim() || null,
-          status: 'requested', requestSummary: summary, warnings: bookingWarnings(vendor, dto.position, jurisdictions, days[days.length - 1]),
-          requestedById: actor.id, requestedAt: now, planRevision: move.planRevision,
-        });
+        moveId, vendorId: vendor.id, position: dto.position, seat: dto.seat, jurisdictions,
+        startDate: days[0], endDate: days[days.length - 1],
+        meetingPoint: dto.meetingPoint, meetingTime: dto.meetingTime ?? null, notes: dto.notes?.trim() || null,
+        status: 'requested', requestSummary: summary, warnings: bookingWarnings(vendor, dto.position, jurisdictions, days[days.length - 1]),
+        requestedById: actor.id, requestedAt: now, planRevision: move.planRevision,
+      });
       const { token, expiresAt } = await this.issueLink(m, booking, move, now);
       await this.audit.record(m, {
         moveId, entity: 'escort_booking', entityId: booking.id, action: 'requested', actorId: actor.id,
