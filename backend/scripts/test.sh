@@ -34,11 +34,13 @@ run_jest() { # run_jest <counts-file> <jest args...>
   JEST_COUNTS_FILE="$out" npx jest --testTimeout=30000 --forceExit --reporters=default --reporters="$ROOT/backend/scripts/count-reporter.cjs" "$@"
 }
 rc=0
+# each run's counts files carry its PostgreSQL port, so two runs side by side (other ports) keep their own
+COUNTS=".data/counts-$PGPORT"
 # lint counts as one test in the closing line
 if npm run -s lint; then lint='{"passed":1,"failed":0,"total":1}'; else rc=1; lint='{"passed":0,"failed":1,"total":1}'; fi
-echo "$lint" > .data/lint.json
-run_jest .data/jest-unit.json --projects common/jest.config.cjs backend/jest.config.cjs frontend/jest.config.cjs --maxWorkers=2 --passWithNoTests "$@" || rc=$?
-run_jest .data/jest-browser.json --projects frontend/e2e/jest.config.cjs --runInBand --passWithNoTests "$@" || rc=$?
+echo "$lint" > "$COUNTS-lint.json"
+run_jest "$COUNTS-unit.json" --projects common/jest.config.cjs backend/jest.config.cjs frontend/jest.config.cjs --maxWorkers=2 --passWithNoTests "$@" || rc=$?
+run_jest "$COUNTS-browser.json" --projects frontend/e2e/jest.config.cjs --runInBand --passWithNoTests "$@" || rc=$?
 # the closing line: every test of both runs; a run that wrote no counts (jest itself failed) is one failure
 node -e '
   const fs = require("fs");
@@ -50,5 +52,5 @@ node -e '
   }
   console.log(`${passed} passed, ${failed} failed`);
   if (ran === 0) process.exit(1);
-' .data/lint.json .data/jest-unit.json .data/jest-browser.json || rc=1
+' "$COUNTS-lint.json" "$COUNTS-unit.json" "$COUNTS-browser.json" || rc=1
 exit $rc
