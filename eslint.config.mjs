@@ -1,4 +1,4 @@
-// Lint for the web app (and the shared package): TypeScript, React hooks, import boundaries and file names.
+// Lint for the web app, the server and the shared package: TypeScript, React hooks, import boundaries and file names.
 import js from '@eslint/js';
 import checkFile from 'eslint-plugin-check-file';
 import importPlugin from 'eslint-plugin-import';
@@ -44,5 +44,25 @@ export default tseslint.config(
       'check-file/folder-naming-convention': ['error', { 'frontend/src/**/': 'KEBAB_CASE' }],
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrors: 'none' }],
     },
+  },
+  {
+    // the server and the shared package: TypeScript's recommended rules, kebab-case file names
+    files: ['backend/src/**/*.ts', 'common/src/**/*.ts'],
+    plugins: { 'check-file': checkFile },
+    languageOptions: { globals: { process: 'readonly', require: 'readonly', __dirname: 'readonly', module: 'writable', console: 'readonly' } },
+    rules: {
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', caughtErrors: 'none' }],
+      'check-file/filename-naming-convention': ['error', { '{backend,common}/src/**/*.ts': 'KEBAB_CASE' }, { ignoreMiddleExtensions: true }],
+    },
+  },
+  {
+    // migrations are named <timestamp>-<kebab-case name>, the order they run in
+    files: ['backend/src/database/migrations/*.ts'],
+    rules: { 'check-file/filename-naming-convention': 'off' },
+  },
+  {
+    // tests may reach into shapes with `any` to feed bad input
+    files: ['**/*.test.ts', '**/*.spec.ts'],
+    rules: { '@typescript-eslint/no-explicit-any': 'off' },
   },
 );

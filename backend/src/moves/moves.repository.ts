@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { DataSource, type EntityManager } from 'typeorm';
+import { DataSource, type EntityManager, type EntityTarget, type ObjectLiteral } from 'typeorm';
 import type { MoveStage, MoveSummaryDto, StageCounts } from '@amberline/common';
 import { entityColumns, entityFromRow, preparedQuery } from '../database/prepared';
 import { Tractor } from '../fleet/entities/tractor.entity';
@@ -72,7 +72,7 @@ export class MovesRepository {
 
   private getSqlText?: string;
   private getSql(): string {
-    const meta = (e: Function) => this.ds.getMetadata(e);
+    const meta = (e: EntityTarget<ObjectLiteral>) => this.ds.getMetadata(e);
     return (this.getSqlText ??= `
       SELECT ${entityColumns(meta(Move), 'm')}, ${entityColumns(meta(Tractor), 't', 'tractor.')}, ${entityColumns(meta(Trailer), 'r', 'trailer.')},
              ${entityColumns(meta(User), 'd', 'driver.')}

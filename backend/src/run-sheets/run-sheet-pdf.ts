@@ -49,7 +49,7 @@ export function printable(text: string): string {
     const word = IN_WORDS[ch];
     if (word) {
       const next = chars[i + 1] ?? '';
-      out += `${out === '' || /[\s(\[]$/.test(out) ? '' : ' '}${word}${next === '' || /[\s).,;:\]]/.test(next) ? '' : ' '}`;
+      out += `${out === '' || /[\s([]$/.test(out) ? '' : ' '}${word}${next === '' || /[\s).,;:\]]/.test(next) ? '' : ' '}`;
       return;
     }
     const glyphs = IN_GLYPHS[ch] ?? (/\s/.test(ch) ? ' ' : ch.normalize('NFKD').replace(/\p{M}/gu, ''));

@@ -7,7 +7,6 @@ import { fixtureRule, known } from './__fixtures__/facts';
 
 // Marking rules in the shape of state texts (fixtures with fixture citations; the states' own records live in src/rulebook).
 const TX_CORNERS = 'fixture: corner flags on an oversize load';
-const TX_WIDE = 'fixture: corner flags over 8 ft 6 in wide';
 const TX_LAMPS = 'fixture: side-projection lamps';
 const TEXAS = fixtureRule('TX', 'Texas', {
   flags: known(

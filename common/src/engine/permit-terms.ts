@@ -4,7 +4,7 @@
  * differences from the rulebook are listed so the desk sees where the two disagree or the rulebook had nothing.
  */
 import { describeDaylight, describeHolidays, describeWeekends } from './travel-describe';
-import type { Curfew, DaylightRule, Fact, HolidayName, HolidayRule, KnownFact, RuleSource, TravelRules, WeekendBan } from './jurisdiction-rule';
+import type { Curfew, DaylightRule, Fact, HolidayName, HolidayRule, KnownFact, TravelRules, WeekendBan } from './jurisdiction-rule';
 import { isKnown } from './jurisdiction-rule';
 import { HOLIDAY_NAMES } from './holidays';
 import type { TravelWindowsResult } from './travel-windows';

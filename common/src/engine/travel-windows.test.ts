@@ -193,7 +193,7 @@ describe('travelWindows: a curfew that crosses midnight (22:00–05:00)', () => 
     ['22:01', false, 'just after the start'],
     ['23:59', false, 'before midnight'],
     ['00:00', false, 'midnight: the part after midnight of the day before'],
-  ] as const)('every day, Wednesday 2024-06-05 at %s: allowed %p (%s)', (hhmm, allowed) => {
+  ] as const)('every day, Wednesday 2024-06-05 at %s: allowed %p (%s)', (hhmm, allowed, _why) => {
     expect(allowedAt(travelWindows({ date: '2024-06-05', ...DC, rule: night() }), hhmm)).toBe(allowed);
   });
 

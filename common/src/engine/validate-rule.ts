@@ -63,8 +63,15 @@ function appliesAbove(field: string, v: unknown): void {
   if (v === undefined) return;
   const a = obj(field, v);
   let any = false;
-  for (const k of ['widthOverIn', 'heightOverIn', 'lengthOverIn']) if (a[k] !== undefined) (inches(`${field}.${k}`, a[k]), (any = true));
-  if (a.grossOverLb !== undefined) (pounds(`${field}.grossOverLb`, a.grossOverLb), (any = true));
+  for (const k of ['widthOverIn', 'heightOverIn', 'lengthOverIn']) {
+    if (a[k] === undefined) continue;
+    inches(`${field}.${k}`, a[k]);
+    any = true;
+  }
+  if (a.grossOverLb !== undefined) {
+    pounds(`${field}.grossOverLb`, a.grossOverLb);
+    any = true;
+  }
   if (!any) fail(field, 'must give at least one of widthOverIn, heightOverIn, lengthOverIn, grossOverLb');
 }
 
