@@ -10,6 +10,7 @@ import { AuthService } from './auth.service';
 import { JwtAuthGuard } from './jwt-auth.guard';
 import { LoginThrottleRepository } from './login-throttle.repository';
 import { LoginThrottleService } from './login-throttle.service';
+import { DEFAULTS } from '../config/app-config';
 
 @Module({
   imports: [
@@ -20,7 +21,7 @@ import { LoginThrottleService } from './login-throttle.service';
         // a ready key object: given a string, the verifier first tries (and fails) to read it as a public key
         // on every request, which cost about 0.7 ms of CPU per call
         secret: createSecretKey(Buffer.from(config.getOrThrow<string>('JWT_SECRET'))),
-        signOptions: { expiresIn: config.get('JWT_EXPIRES_IN') ?? '12h', algorithm: 'HS256' },
+        signOptions: { expiresIn: config.get('JWT_EXPIRES_IN') ?? DEFAULTS.JWT_EXPIRES_IN, algorithm: 'HS256' },
         verifyOptions: { algorithms: ['HS256'] },
       }),
     }),

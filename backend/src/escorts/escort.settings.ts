@@ -1,4 +1,5 @@
 import { ConfigService } from '@nestjs/config';
+import { DEFAULTS } from '../config/app-config';
 import { intervalFrom } from '../mail/mail.settings';
 
 export type EscortSettings = {
@@ -7,5 +8,5 @@ export type EscortSettings = {
 };
 export const ESCORT_SETTINGS = Symbol('ESCORT_SETTINGS');
 export const escortSettingsFrom = (config: ConfigService): EscortSettings => ({
-  reminderIntervalMs: intervalFrom(config, 'ESCORT_REMINDER_INTERVAL_MS', 300_000),
+  reminderIntervalMs: intervalFrom(config, 'ESCORT_REMINDER_INTERVAL_MS', DEFAULTS.ESCORT_REMINDER_INTERVAL_MS),
 });

@@ -1,4 +1,5 @@
 import { ConfigService } from '@nestjs/config';
+import { DEFAULTS } from '../config/app-config';
 
 /** How this instance sends mail. One provider, so tests can give their own (an in-process catcher, a channel of their own). */
 export type MailSettings = {
@@ -34,12 +35,12 @@ export function intervalFrom(config: ConfigService, key: string, fallbackMs: num
 
 export function mailSettingsFrom(config: ConfigService): MailSettings {
   return {
-    smtpHost: config.get<string>('SMTP_HOST') ?? '127.0.0.1',
-    smtpPort: Number(config.get<string>('SMTP_PORT') ?? 1025),
-    from: config.get<string>('MAIL_FROM') ?? 'Amberline dispatch <dispatch@amberline.example>',
-    appUrl: (config.get<string>('APP_URL') ?? 'http://127.0.0.1:3000').replace(/\/+$/, ''),
-    channel: config.get<string>('MAIL_CHANNEL') ?? 'default',
-    sendIntervalMs: intervalFrom(config, 'MAIL_SEND_INTERVAL_MS', 5_000),
+    smtpHost: config.get<string>('SMTP_HOST') ?? DEFAULTS.SMTP_HOST,
+    smtpPort: Number(config.get<string>('SMTP_PORT') ?? DEFAULTS.SMTP_PORT),
+    from: config.get<string>('MAIL_FROM') ?? DEFAULTS.MAIL_FROM,
+    appUrl: (config.get<string>('APP_URL') ?? DEFAULTS.APP_URL).replace(/\/+$/, ''),
+    channel: config.get<string>('MAIL_CHANNEL') ?? DEFAULTS.MAIL_CHANNEL,
+    sendIntervalMs: intervalFrom(config, 'MAIL_SEND_INTERVAL_MS', DEFAULTS.MAIL_SEND_INTERVAL_MS),
     maxAttempts: 20,
     baseBackoffMs: 30_000,
     maxBackoffMs: 3_600_000,
