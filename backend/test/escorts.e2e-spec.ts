@@ -298,7 +298,7 @@ describe('escort vendors and bookings (/api/vendors, /api/moves/:id/escort-booki
         for (const res of [await t.http().get(`/api/escort-responses/${bad}`), await confirm(bad)]) {
           expect(res.status).toBe(404);
           expect(res.body).toEqual({
-            statusCode: 404, error: 'not_found', details: { link: 'invalid' },
+            statusCode: 404, error: 'not_found', code: 'not_found', details: { link: 'invalid' },
             message: 'This link is not valid. Check that it was copied whole, or ask the dispatcher who sent it for a new one.',
           });
         }
@@ -314,7 +314,7 @@ describe('escort vendors and bookings (/api/vendors, /api/moves/:id/escort-booki
       const responses = t.app.get(EscortResponsesService);
       // controlled clock: the same link seen 6 days and 7 days + 1 minute from now
       await expect(responses.view(token, new Date(Date.now() + 6 * 86_400_000))).resolves.toMatchObject({ move: { reference: far.reference } });
-      await expect(responses.view(token, new Date(Date.now() + 7 * 86_400_000 + 60_000))).rejects.toMatchObject({ status: 410, details: { link: 'expired' } });
+      await expect(responses.view(token, new Date(Date.now() + 7 * 86_400_000 + 60_000))).rejects.toMatchObject({ code: 'gone', details: { link: 'expired' } });
 
       const soon = await newMove({ requestedDeparture: daysFromNow(3) });
       const second = await requestAndCatchLink(soon.id, v);
@@ -324,7 +324,7 @@ describe('escort vendors and bookings (/api/vendors, /api/moves/:id/escort-booki
       await t.ds.query(`UPDATE escort_response_tokens SET expires_at = now() - interval '1 minute' WHERE booking_id = $1`, [second.booking.id]);
       const res = await confirm(second.token);
       expect(res.status).toBe(410);
-      expect(res.body).toEqual({ statusCode: 410, error: 'not_found', message: 'This link has expired. Ask the dispatcher who sent it for a new one.', details: { link: 'expired' } });
+      expect(res.body).toEqual({ statusCode: 410, error: 'not_found', code: 'gone', message: 'This link has expired. Ask the dispatcher who sent it for a new one.', details: { link: 'expired' } });
       expect((await escortsOf(soon.id)).bookings[0].status).toBe('requested');
     });
 

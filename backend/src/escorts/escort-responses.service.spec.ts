@@ -1,6 +1,5 @@
 import { DOMAIN_ERRORS, DomainError } from '@amberline/common';
 import type { AuditService } from '../audit/audit.service';
-import { AppException } from '../core/app-exception';
 import type { MailService } from '../mail/mail.service';
 import type { MovesRepository } from '../moves/moves.repository';
 import type { EscortBooking } from './entities/escort-booking.entity';
@@ -56,10 +55,10 @@ describe('EscortResponsesService: a link takes one answer', () => {
 
   it('an unknown or malformed link is not valid (404), an expired one is gone (410), and neither says more', async () => {
     const unknown = await thrown(setup({ token: null, booking: null }).service.view(TOKEN, NOW));
-    expect(unknown).toBeInstanceOf(AppException);
-    expect(unknown).toMatchObject({ status: 404, details: { link: 'invalid' } });
-    expect(await thrown(setup({ token: link(), booking: booking() }).service.view('not-a-token', NOW))).toMatchObject({ status: 404, details: { link: 'invalid' } });
+    expect(unknown).toBeInstanceOf(DomainError);
+    expect(unknown).toMatchObject({ code: DOMAIN_ERRORS.NOT_FOUND, details: { link: 'invalid' } });
+    expect(await thrown(setup({ token: link(), booking: booking() }).service.view('not-a-token', NOW))).toMatchObject({ code: DOMAIN_ERRORS.NOT_FOUND, details: { link: 'invalid' } });
     const expired = await thrown(setup({ token: link({ expiresAt: new Date('2026-05-04T14:59:00Z') }), booking: booking() }).service.view(TOKEN, NOW));
-    expect(expired).toMatchObject({ status: 410, details: { link: 'expired' } });
+    expect(expired).toMatchObject({ code: DOMAIN_ERRORS.GONE, details: { link: 'expired' } });
   });
 });

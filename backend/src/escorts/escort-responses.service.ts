@@ -5,7 +5,7 @@ import {
   type EscortAnswer, type EscortAnswerResult, type EscortRequestView,
 } from '@amberline/common';
 import { AuditService } from '../audit/audit.service';
-import { AppException, fieldError } from '../core/app-exception';
+import { fieldError } from '../core/app-exception';
 import { MailService } from '../mail/mail.service';
 import { MovesRepository, type Move } from '../moves/moves.repository';
 import { EscortAnswerDto } from './dto/escorts.dto';
@@ -20,8 +20,8 @@ import { EscortsRepository, type BookingVendor } from './escorts.repository';
  * expired link keeps its plain body (`{ statusCode, error, message, details }`, no domain code): the vendor's page
  * and its tests read exactly that; a used or closed link is the domain's LINK_CLOSED, with `details.link` saying which.
  */
-const INVALID = () => new AppException(404, 'not_found', 'This link is not valid. Check that it was copied whole, or ask the dispatcher who sent it for a new one.', { link: 'invalid' });
-const EXPIRED = () => new AppException(410, 'not_found', 'This link has expired. Ask the dispatcher who sent it for a new one.', { link: 'expired' });
+const INVALID = () => new DomainError(DOMAIN_ERRORS.NOT_FOUND, 'This link is not valid. Check that it was copied whole, or ask the dispatcher who sent it for a new one.', { link: 'invalid' });
+const EXPIRED = () => new DomainError(DOMAIN_ERRORS.GONE, 'This link has expired. Ask the dispatcher who sent it for a new one.', { link: 'expired' });
 const USED = () => new DomainError(DOMAIN_ERRORS.LINK_CLOSED, 'This link has already been used to answer. Call the dispatcher to change the answer.', { link: 'used' });
 const CLOSED = () => new DomainError(DOMAIN_ERRORS.LINK_CLOSED, 'This request is no longer open. Call the dispatcher if you have questions.', { link: 'closed' });
 
