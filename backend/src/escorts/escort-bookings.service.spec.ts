@@ -1,4 +1,4 @@
-import { DOMAIN_ERRORS, DomainError, type SessionUser } from '@amberline/common';
+import { DOMAIN_ERRORS, type SessionUser } from '@amberline/common';
 import type { AuditService } from '../audit/audit.service';
 import type { MailService } from '../mail/mail.service';
 import type { MailSettings } from '../mail/mail.settings';
@@ -8,6 +8,7 @@ import type { VendorsService } from '../vendors/vendors.service';
 import type { EscortBooking } from './entities/escort-booking.entity';
 import { EscortBookingsService } from './escort-bookings.service';
 import type { EscortsRepository } from './escorts.repository';
+import { refusal } from '../../test/utils/refusal';
 
 const NOW = new Date('2026-05-04T15:00:00Z');
 const dispatcher: SessionUser = { id: 'u-1', role: 'dispatcher', email: 'd@amberline.example', name: 'Dee' };
@@ -30,12 +31,6 @@ function setup(locked: EscortBooking | null, current: Move = move()) {
   );
   return { service, repo, moves };
 }
-
-const refusal = async (p: Promise<unknown>): Promise<DomainError> => {
-  const e = await p.then(() => null, (x: unknown) => x);
-  expect(e).toBeInstanceOf(DomainError);
-  return e as DomainError;
-};
 
 describe('EscortBookingsService.cancel', () => {
   it('a booking not on this move is not found', async () => {

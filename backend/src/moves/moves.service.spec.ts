@@ -1,4 +1,4 @@
-import { DOMAIN_ERRORS, DomainError, type SessionUser } from '@amberline/common';
+import { DOMAIN_ERRORS, type SessionUser } from '@amberline/common';
 import type { AuditService } from '../audit/audit.service';
 import type { RulebookService } from '../rulebook/rulebook.service';
 import type { AssessmentService } from './assessment.service';
@@ -6,6 +6,7 @@ import type { Move } from './entities/move.entity';
 import { MoveExtensionsRegistry } from './move-extensions';
 import type { MovesRepository } from './moves.repository';
 import { MovesService } from './moves.service';
+import { refusal } from '../../test/utils/refusal';
 
 const NOW = new Date('2026-05-04T15:00:00Z');
 const dispatcher: SessionUser = { id: 'u-1', role: 'dispatcher', email: 'd@amberline.example', name: 'Dee' };
@@ -39,12 +40,6 @@ function setup(found: Move | null) {
   );
   return { service, repo, audit };
 }
-
-const refusal = async (p: Promise<unknown>): Promise<DomainError> => {
-  const e = await p.then(() => null, (x: unknown) => x);
-  expect(e).toBeInstanceOf(DomainError);
-  return e as DomainError;
-};
 
 describe('MovesService', () => {
   it('a move that is not there is not found', async () => {

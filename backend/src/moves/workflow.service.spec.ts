@@ -6,6 +6,7 @@ import type { MovesRepository } from './moves.repository';
 import type { MovesService } from './moves.service';
 import type { ScheduleService } from './schedule.service';
 import { WorkflowService } from './workflow.service';
+import { refusal } from '../../test/utils/refusal';
 
 const NOW = new Date('2026-05-04T15:00:00Z');
 const actor: SessionUser = { id: 'u-1', role: 'dispatcher', email: 'd@amberline.example', name: 'Dee' };
@@ -37,12 +38,6 @@ function setup(current: Move) {
   );
   return { service, repo, moves, audit, extensions };
 }
-
-const refusal = async (p: Promise<unknown>): Promise<DomainError> => {
-  const e = await p.then(() => null, (x: unknown) => x);
-  expect(e).toBeInstanceOf(DomainError);
-  return e as DomainError;
-};
 
 describe('WorkflowService.transition', () => {
   it('refuses a stage that is not the next step, listing it as unmet, and writes nothing', async () => {

@@ -1,4 +1,4 @@
-import { DOMAIN_ERRORS, DomainError, planCheck, SAMPLE_PLAN, type AssessmentDto, type CheckFinding, type SessionUser } from '@amberline/common';
+import { DOMAIN_ERRORS, planCheck, SAMPLE_PLAN, type AssessmentDto, type CheckFinding, type SessionUser } from '@amberline/common';
 import type { AuditService } from '../audit/audit.service';
 import type { MailService } from '../mail/mail.service';
 import type { Move } from '../moves/entities/move.entity';
@@ -9,6 +9,7 @@ import type { DepartureChecks } from './entities/departure-checks.entity';
 import { RunSheetSourcesRegistry } from './run-sheet-sources';
 import type { RunSheetsRepository } from './run-sheets.repository';
 import { RunSheetsService } from './run-sheets.service';
+import { refusal } from '../../test/utils/refusal';
 
 const NOW = new Date('2026-05-04T15:00:00Z');
 const driver: SessionUser = { id: 'drv-1', role: 'driver', email: 'drv@amberline.example', name: 'Rae' };
@@ -51,12 +52,6 @@ function setup(current: Move = move()) {
   );
   return { service, repo, moves };
 }
-
-const refusal = async (p: Promise<unknown>): Promise<DomainError> => {
-  const e = await p.then(() => null, (x: unknown) => x);
-  expect(e).toBeInstanceOf(DomainError);
-  return e as DomainError;
-};
 
 describe('RunSheetsService.acknowledge', () => {
   it('refuses a fingerprint that is not the current run sheet\'s: the run sheet changed', async () => {

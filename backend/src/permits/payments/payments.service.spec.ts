@@ -6,6 +6,7 @@ import type { Permit } from '../entities/permit.entity';
 import type { PaymentsRepository } from './payments.repository';
 import { PaymentsService } from './payments.service';
 import type { StripeClient, StripeSettings } from './stripe.provider';
+import { refusal } from '../../../test/utils/refusal';
 
 const clerk: SessionUser = { id: '00000000-0000-4000-8000-000000000001', email: 'clerk@example.test', name: 'Clerk', role: 'permit_clerk' };
 const now = new Date('2026-12-01T15:00:00Z');
@@ -32,8 +33,6 @@ function setup(p: Permit | null, paid: PermitPayment | null = null, stripe: Part
   const audit = { record: async () => undefined } as unknown as AuditService;
   return { s: new PaymentsService(repo, audit, stripe as StripeClient, settings), inserted };
 }
-
-const refusal = (p: Promise<unknown>) => p.then(() => { throw new Error('expected a refusal'); }, (e) => e as DomainError);
 
 describe('PaymentsService.pay', () => {
   it.each([['to_file'], ['filed'], ['needs_amendment'], ['void']])('pays only an issued permit: %s is refused', async (status) => {
