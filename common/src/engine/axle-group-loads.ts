@@ -261,20 +261,10 @@ function validateInput(input: AxleGroupLoadsInput): void {
   });
 }
 
-type Solved = {
-  steerLb: number;
-  driveLb: number;
-  trailerLb: number;
-  kingpinLb: number;
-  fifthWheelLb: number;
-  jeepPinLb: number | null;
-  jeepLb: number | null;
-  boosterLb: number | null;
-  boosterPinLb: number | null;
-  boosterPinMomentLbFt: number | null;
-  totalWeightLb: number;
-  groups: GroupLoad[];
-};
+type Solved = Pick<
+  AxleGroupLoadsResult,
+  'steerLb' | 'driveLb' | 'trailerLb' | 'kingpinLb' | 'fifthWheelLb' | 'jeepPinLb' | 'jeepLb' | 'boosterLb' | 'boosterPinLb' | 'boosterPinMomentLbFt' | 'groups'
+> & { totalWeightLb: number };
 
 const share = (p: Placed, loadLb: number): AxleLoad[] => {
   if (!p.spec) return [];
